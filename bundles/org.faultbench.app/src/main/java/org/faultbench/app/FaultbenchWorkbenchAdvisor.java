@@ -1,0 +1,25 @@
+package org.faultbench.app;
+
+import org.eclipse.ui.application.IWorkbenchConfigurer;
+import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
+import org.eclipse.ui.application.WorkbenchAdvisor;
+import org.eclipse.ui.application.WorkbenchWindowAdvisor;
+
+/** Opens the trap-study perspective first and remembers the user's layout between sessions. */
+class FaultbenchWorkbenchAdvisor extends WorkbenchAdvisor {
+
+    @Override
+    public void initialize(IWorkbenchConfigurer configurer) {
+        configurer.setSaveAndRestore(true);
+    }
+
+    @Override
+    public String getInitialWindowPerspectiveId() {
+        return TrapStudyPerspective.ID;
+    }
+
+    @Override
+    public WorkbenchWindowAdvisor createWorkbenchWindowAdvisor(IWorkbenchWindowConfigurer configurer) {
+        return new FaultbenchWindowAdvisor(configurer);
+    }
+}

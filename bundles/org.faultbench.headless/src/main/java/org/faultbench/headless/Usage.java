@@ -1,0 +1,28 @@
+package org.faultbench.headless;
+
+/** The --help text. */
+final class Usage {
+    static final String TEXT = String.join(System.lineSeparator(),
+            "Faultbench headless analysis",
+            "",
+            "Usage:",
+            "  faultbench.sh -application org.faultbench.headless.batch <command> [options]",
+            "",
+            "Commands:",
+            "  analyze <analysis file>   run the trap analysis with Monte Carlo uncertainty",
+            "      --realisations N      number of realisations (default 1000)",
+            "      --seed S              random seed (default 1); the same seed gives the same results",
+            "      --threads T           worker threads (default: all cores); results do not depend on T",
+            "      --out DIR             output folder (default: ./faultbench-results)",
+            "  --version                 print the program version",
+            "  --help                    print this text",
+            "",
+            "Exit codes: 0 ok, 2 bad command line, 3 bad input, 4 analysis failed.",
+            "",
+            "Results are decision support only: calibrate against field data and defer to licensed",
+            "professionals and local regulations.",
+            "");
+
+    private Usage() {
+    }
+}

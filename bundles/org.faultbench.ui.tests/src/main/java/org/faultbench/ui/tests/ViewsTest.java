@@ -1,0 +1,55 @@
+package org.faultbench.ui.tests;
+
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.eclipse.ui.IViewPart;
+import org.eclipse.ui.IWorkbenchPage;
+import org.eclipse.ui.PlatformUI;
+import org.faultbench.digitize.ui.MapSheetView;
+import org.faultbench.faults.ui.FaultInspectorView;
+import org.faultbench.juxtaposition.ui.AllanDiagramView;
+import org.faultbench.sim.ui.ResultsView;
+import org.faultbench.strat.ui.UnitStackView;
+import org.junit.jupiter.api.Test;
+
+/** Each UI bundle's view opens in the workbench and shows its content. */
+class ViewsTest {
+
+    private static IViewPart show(String id) throws Exception {
+        IWorkbenchPage page = PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();
+        IViewPart part = page.showView(id);
+        WorkbenchSmokeTest.spin(100);
+        return part;
+    }
+
+    @Test
+    void mapSheet() throws Exception {
+        MapSheetView view = assertInstanceOf(MapSheetView.class, show(MapSheetView.ID));
+        assertTrue(view.summaryText().contains("contours"), view.summaryText());
+    }
+
+    @Test
+    void faultInspector() throws Exception {
+        FaultInspectorView view = assertInstanceOf(FaultInspectorView.class, show(FaultInspectorView.ID));
+        assertTrue(view.summaryText().contains("throw profiles"), view.summaryText());
+    }
+
+    @Test
+    void unitStack() throws Exception {
+        UnitStackView view = assertInstanceOf(UnitStackView.class, show(UnitStackView.ID));
+        assertTrue(view.summaryText().contains("clay fraction"), view.summaryText());
+    }
+
+    @Test
+    void allanDiagram() throws Exception {
+        AllanDiagramView view = assertInstanceOf(AllanDiagramView.class, show(AllanDiagramView.ID));
+        assertTrue(view.summaryText().contains("Juxtaposition"), view.summaryText());
+    }
+
+    @Test
+    void results() throws Exception {
+        ResultsView view = assertInstanceOf(ResultsView.class, show(ResultsView.ID));
+        assertTrue(view.summaryText().contains("exceedance"), view.summaryText());
+    }
+}

@@ -1,0 +1,27 @@
+#!/bin/sh
+# Launches the built product under Xvfb, waits for the workbench window, takes a screenshot of the whole
+# virtual screen and stops everything.   releng/screenshot.sh [output.png]   (default docs/workbench.png)
+set -e
+FAULTBENCH_ROOT=$(cd "$(dirname "$0")/.." && pwd)
+. "$FAULTBENCH_ROOT/releng/scripts/ensure-system.sh"
+. "$FAULTBENCH_ROOT/releng/scripts/product-dir.sh"
+faultbench_ensure_packages $FAULTBENCH_PACKAGES imagemagick x11-utils
+OUT=${1:-$FAULTBENCH_ROOT/docs/workbench.png}
+[ -x "$FAULTBENCH_PRODUCT/faultbench.sh" ] || { echo "build the product first: releng/run-tests.sh or ./mvnw -B -DskipTests verify" >&2; exit 1; }
+DISPLAY_NUM=:$(( 90 + $$ % 9 ))
+Xvfb $DISPLAY_NUM -screen 0 1280x900x24 -nolisten tcp >/dev/null 2>&1 &
+XVFB=$!
+WS=$(mktemp -d)
+cp -r "$FAULTBENCH_ROOT/demo-workspace/." "$WS/" 2>/dev/null || true
+trap 'kill $APP $XVFB 2>/dev/null; rm -rf "$WS"' EXIT
+sleep 1
+DISPLAY=$DISPLAY_NUM "$FAULTBENCH_PRODUCT/faultbench.sh" -data "$WS" >"$WS/console.log" 2>&1 &
+APP=$!
+for i in $(seq 1 60); do
+  if DISPLAY=$DISPLAY_NUM xwininfo -root -tree 2>/dev/null | grep -q '"Faultbench'; then break; fi
+  sleep 1
+done
+sleep 4
+mkdir -p "$(dirname "$OUT")"
+DISPLAY=$DISPLAY_NUM import -window root "$OUT"
+echo "screenshot: $OUT"
