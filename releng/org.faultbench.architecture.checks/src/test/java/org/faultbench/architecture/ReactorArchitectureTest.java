@@ -68,7 +68,7 @@ class ReactorArchitectureTest {
     void noEclipseUpdateSiteIsReferenced() throws IOException {
         List<String> offenders = new ArrayList<>();
         try (Stream<Path> files = Files.walk(ROOT)) {
-            for (Path f : files.filter(ReactorArchitectureTest::isBuildFile).toList()) {
+            for (Path f : files.filter(Files::isRegularFile).filter(ReactorArchitectureTest::isBuildFile).toList()) {
                 String text = Files.readString(f, StandardCharsets.UTF_8);
                 if (text.contains("download.eclipse.org") || text.contains("type=\"InstallableUnit\"")
                         || text.contains("<layout>p2</layout>")) {

@@ -1,0 +1,38 @@
+package org.faultbench.seal;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.faultbench.core.LithologyClass;
+
+/**
+ * A rule that turns the geometry and stratigraphy at a fault point into a seal attribute and a threshold pressure.
+ * Implementations are stateless with respect to points, so one instance evaluates a whole fault.
+ */
+public interface SealCriterion {
+
+    /** Stable identifier, used to register and find the criterion (e.g. "sgr"). */
+    String id();
+
+    /** Name shown to the user. */
+    String name();
+
+    /** Lithology classes the rule was calibrated for. */
+    Set<LithologyClass> validFor();
+
+    SealEvaluation evaluate(FaultPointContext ctx);
+
+    /** One warning for each unit in the throw window whose lithology the criterion is not valid for. */
+    default List<ApplicabilityWarning> applicabilityWarnings(FaultPointContext ctx) {
+        ThrowWindow window = ThrowWindow.of(ctx);
+        List<ApplicabilityWarning> warnings = new ArrayList<>();
+        for (int index : window.unitsInside()) {
+            LithologyClass lithology = ctx.footwallColumn().unit(index).lithology();
+            if (!validFor().contains(lithology)) {
+                warnings.add(ApplicabilityWarning.of(this, ctx.footwallColumn().unit(index), window));
+            }
+        }
+        return List.copyOf(warnings);
+    }
+}
