@@ -10,8 +10,9 @@ if [ -z "$LAUNCHER" ]; then
   echo "faultbench.sh: no org.eclipse.equinox.launcher jar under $HERE/plugins" >&2
   exit 1
 fi
+# the batch application needs no display: keep AWT headless and skip the splash screen
 case " $* " in
-  *" -application org.faultbench.headless.batch "*) HEADLESS="-nosplash -Djava.awt.headless=true" ;;
-  *) HEADLESS="" ;;
+  *" -application org.faultbench.headless.batch "*) VMHEADLESS="-Djava.awt.headless=true"; NOSPLASH="-nosplash" ;;
+  *) VMHEADLESS=""; NOSPLASH="" ;;
 esac
-exec "$JAVA" -Dosgi.requiredJavaVersion=17 $FAULTBENCH_VMARGS -jar "$LAUNCHER" -install "$HERE" $HEADLESS "$@"
+exec "$JAVA" -Dosgi.requiredJavaVersion=17 $VMHEADLESS $FAULTBENCH_VMARGS -jar "$LAUNCHER" -install "$HERE" $NOSPLASH "$@"

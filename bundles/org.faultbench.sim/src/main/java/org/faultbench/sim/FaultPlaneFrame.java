@@ -1,0 +1,89 @@
+package org.faultbench.sim;
+
+import org.faultbench.core.column.ResolvedColumn;
+import org.faultbench.faults.FaultPlaneColumns;
+import org.faultbench.faults.FaultPlaneSampler;
+import org.faultbench.faults.Wall;
+
+/**
+ * The nominal fault-plane columns of one bounding fault in primitive arrays, which side the compartment is on,
+ * and the (u, z) cell frame on which leak probability is counted.
+ */
+final class FaultPlaneFrame {
+    /** Room above and below the deepest and shallowest cut-off, beyond the column itself, m. */
+    private static final double MARGIN = 50;
+
+    final BoundingFault bounding;
+    final int index;
+    final int columns;
+    final double[] u;
+    final double[] x;
+    final double[] y;
+    final double[] footwall;
+    final double[] hangingWall;
+    final boolean[] hasData;
+    final Wall compartmentWall;
+    final double columnWidth;
+    /** Leak-probability cells: rows of height {@link #cellHeight} from {@link #zTop} down. */
+    final double zTop;
+    final double cellHeight;
+    final int rows;
+
+    FaultPlaneFrame(BoundingFault bounding, int index, double crestX, double crestY, ResolvedColumn nominal,
+            int referenceUnit, double cellHeight) {
+        this.bounding = bounding;
+        this.index = index;
+        FaultPlaneColumns plane = new FaultPlaneSampler(bounding.columns()).sample(bounding.fault(),
+                bounding.footwallCutOff(), bounding.hangingWallCutOff());
+        columns = plane.count();
+        columnWidth = plane.width();
+        u = new double[columns];
+        x = new double[columns];
+        y = new double[columns];
+        footwall = new double[columns];
+        hangingWall = new double[columns];
+        hasData = new boolean[columns];
+        double shallowest = Double.POSITIVE_INFINITY;
+        double deepest = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k < columns; k++) {
+            u[k] = plane.u(k);
+            x[k] = plane.x(k);
+            y[k] = plane.y(k);
+            footwall[k] = plane.footwallDepth(k);
+            hangingWall[k] = plane.hangingWallDepth(k);
+            hasData[k] = plane.hasData(k);
+            if (hasData[k]) {
+                shallowest = Math.min(shallowest, Math.min(footwall[k], hangingWall[k]));
+                deepest = Math.max(deepest, Math.max(footwall[k], hangingWall[k]));
+            }
+        }
+        if (shallowest > deepest) {
+            throw new IllegalArgumentException("fault '" + bounding.id() + "': no fault-plane column has cut-off depths"
+                    + " on both walls");
+        }
+        compartmentWall = bounding.fault().wallAt(crestX, crestY).orElseThrow(() -> new IllegalArgumentException(
+                "the compartment crest lies on the trace of fault '" + bounding.id() + "'"));
+        this.cellHeight = cellHeight;
+        zTop = shallowest - nominal.top(referenceUnit) - MARGIN;
+        double zBase = deepest + (nominal.thickness() - nominal.top(referenceUnit)) + MARGIN;
+        rows = (int) Math.ceil((zBase - zTop) / cellHeight);
+    }
+
+    boolean compartmentOnFootwall() {
+        return compartmentWall == Wall.FOOTWALL;
+    }
+
+    int cells() {
+        return rows * columns;
+    }
+
+    /** Row of the cell containing depth z, or -1 / rows outside the frame. */
+    int row(double z) {
+        double r = Math.floor((z - zTop) / cellHeight);
+        return r < 0 ? -1 : (int) Math.min(r, rows);
+    }
+
+    double rowCentre(int row) {
+        return zTop + (row + 0.5) * cellHeight;
+    }
+}
