@@ -1,13 +1,27 @@
 package org.faultbench.headless;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalInt;
+import java.util.OptionalLong;
 
-/** {@code analyze <analysis file> [--realisations N] [--seed S] [--threads T] [--out DIR]}. */
-record AnalyzeCommand(Path analysisFile, int realisations, long seed, int threads, Path outDir) implements BatchCommand {
+import org.faultbench.sim.MonteCarloSimulator;
+import org.faultbench.sim.SimulationResult;
+import org.faultbench.sim.SimulationSettings;
+import org.faultbench.study.AnalysisFile;
+import org.faultbench.study.AnalysisFileReader;
+import org.faultbench.study.ResultsWriter;
+import org.faultbench.study.StudyFormatException;
 
-    static final int DEFAULT_REALISATIONS = 1000;
-    static final long DEFAULT_SEED = 1L;
+/**
+ * {@code analyze <analysis file> [--realisations N] [--seed S] [--threads T] [--out DIR]}: reads the analysis file,
+ * runs the Monte Carlo trap analysis and writes results.json, summary.csv and the leak-probability tables to DIR.
+ * Options left out take the analysis file's own values.
+ */
+record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong seed, int threads, Path outDir)
+        implements BatchCommand {
+
     static final Path DEFAULT_OUT = Path.of("faultbench-results");
 
     static BatchCommand parse(List<String> args) {
@@ -15,8 +29,8 @@ record AnalyzeCommand(Path analysisFile, int realisations, long seed, int thread
             return new UsageError("analyze needs an analysis file");
         }
         Path file = Path.of(args.get(0));
-        int realisations = DEFAULT_REALISATIONS;
-        long seed = DEFAULT_SEED;
+        OptionalInt realisations = OptionalInt.empty();
+        OptionalLong seed = OptionalLong.empty();
         int threads = Runtime.getRuntime().availableProcessors();
         Path out = DEFAULT_OUT;
         for (int i = 1; i < args.size(); i += 2) {
@@ -28,10 +42,10 @@ record AnalyzeCommand(Path analysisFile, int realisations, long seed, int thread
             try {
                 switch (option) {
                 case "--realisations":
-                    realisations = positiveInt(option, value);
+                    realisations = OptionalInt.of(positiveInt(option, value));
                     break;
                 case "--seed":
-                    seed = Long.parseLong(value);
+                    seed = OptionalLong.of(Long.parseLong(value));
                     break;
                 case "--threads":
                     threads = positiveInt(option, value);
@@ -59,7 +73,33 @@ record AnalyzeCommand(Path analysisFile, int realisations, long seed, int thread
 
     @Override
     public int execute(BatchContext context) {
-        context.err().println("faultbench: analyze is not available in this build yet (" + analysisFile + ")");
-        return ExitCode.FAILED;
+        AnalysisFile analysis;
+        try {
+            analysis = new AnalysisFileReader().read(analysisFile);
+        } catch (StudyFormatException e) {
+            context.err().println("faultbench: " + e.getMessage());
+            return ExitCode.BAD_INPUT;
+        }
+        SimulationSettings settings = new SimulationSettings(realisations.orElse(analysis.realisations()),
+                seed.orElse(analysis.seed()), threads, analysis.cellHeight());
+        SimulationResult result;
+        try {
+            result = new MonteCarloSimulator().run(analysis.study(), settings, new ConsoleProgressMonitor(context.err()));
+        } catch (IllegalArgumentException e) {
+            context.err().println("faultbench: " + analysisFile + ": " + e.getMessage());
+            return ExitCode.BAD_INPUT;
+        } catch (RuntimeException e) {
+            context.err().println("faultbench: the analysis failed: " + e);
+            return ExitCode.FAILED;
+        }
+        try {
+            new ResultsWriter(context.programVersion()).write(analysis, result, outDir);
+        } catch (IOException e) {
+            context.err().println("faultbench: cannot write results to " + outDir + ": " + e.getMessage());
+            return ExitCode.FAILED;
+        }
+        new ResultTable(context.out()).print(result);
+        context.out().println("Results written to " + outDir.toAbsolutePath());
+        return ExitCode.OK;
     }
 }

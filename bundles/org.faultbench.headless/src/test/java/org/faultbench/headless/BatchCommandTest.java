@@ -46,8 +46,8 @@ class BatchCommandTest {
                 "--seed", "42", "--threads", "2", "--out", "res" });
         AnalyzeCommand a = assertInstanceOf(AnalyzeCommand.class, c);
         assertEquals(Path.of("study.json"), a.analysisFile());
-        assertEquals(500, a.realisations());
-        assertEquals(42L, a.seed());
+        assertEquals(500, a.realisations().getAsInt());
+        assertEquals(42L, a.seed().getAsLong());
         assertEquals(2, a.threads());
         assertEquals(Path.of("res"), a.outDir());
     }

@@ -1,0 +1,269 @@
+package org.faultbench.study;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.stream.Stream;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+
+import org.faultbench.sim.ExceedanceLevel;
+import org.faultbench.sim.LeakLocation;
+import org.faultbench.sim.LeakProbabilityMap;
+import org.faultbench.sim.SimulationResult;
+import org.faultbench.sim.StreamingSummary;
+import org.faultbench.sim.TornadoBar;
+import org.faultbench.sim.UnitQuantity;
+import org.faultbench.sim.UnitSummary;
+import org.faultbench.trap.Mechanism;
+
+/**
+ * Writes a run's results into a folder: {@code results.json} (schema "faultbench-results" version
+ * {@value #RESULTS_VERSION}, described in DEVELOPERS.md), {@code summary.csv} (one row per unit and quantity) and
+ * one {@code leak-probability-<fault>.csv} per fault. Files are first written to a temporary folder beside the
+ * target and then moved in, so a failed run leaves nothing half-written.
+ */
+public final class ResultsWriter {
+    public static final int RESULTS_VERSION = 1;
+
+    /** The cautions that go with every result file. */
+    public static final List<String> CAUTIONS = List.of(
+            "Decision support only: results are model estimates, not a decision.",
+            "Inputs are uncertain; read the P90/P50/P10 ranges (exceedance convention: P90 is the low case), not single"
+                    + " numbers.",
+            "Seal calibrations are basin-specific; calibrate against field pressures and contacts.",
+            "Clay-based seal rules do not apply to carbonates, evaporites or crystalline rocks.",
+            "Defer to licensed professionals and local regulations for well, reserves and storage decisions.");
+
+    private final String programVersion;
+
+    public ResultsWriter(String programVersion) {
+        this.programVersion = programVersion;
+    }
+
+    public void write(AnalysisFile analysis, SimulationResult result, Path outDir) throws IOException {
+        Path absolute = outDir.toAbsolutePath();
+        Files.createDirectories(absolute.getParent());
+        Path staging = Files.createTempDirectory(absolute.getParent(), ".faultbench-out-");
+        try {
+            Files.writeString(staging.resolve("results.json"),
+                    new GsonBuilder().setPrettyPrinting().serializeSpecialFloatingPointValues().create()
+                            .toJson(resultsJson(analysis, result)),
+                    StandardCharsets.UTF_8);
+            Files.writeString(staging.resolve("summary.csv"), summaryCsv(result), StandardCharsets.UTF_8);
+            for (LeakProbabilityMap map : result.leakMaps()) {
+                Files.writeString(staging.resolve("leak-probability-" + safe(map.faultId()) + ".csv"), leakCsv(map),
+                        StandardCharsets.UTF_8);
+            }
+            Files.createDirectories(absolute);
+            try (Stream<Path> files = Files.list(staging)) {
+                for (Path f : files.toList()) {
+                    Files.move(f, absolute.resolve(f.getFileName()), StandardCopyOption.REPLACE_EXISTING,
+                            StandardCopyOption.ATOMIC_MOVE);
+                }
+            }
+        } finally {
+            deleteQuietly(staging);
+        }
+    }
+
+    private static String safe(String id) {
+        return id.replaceAll("[^A-Za-z0-9._-]", "_");
+    }
+
+    private static void deleteQuietly(Path dir) {
+        try (Stream<Path> walk = Files.walk(dir)) {
+            walk.sorted(Comparator.reverseOrder()).forEach(p -> {
+                try {
+                    Files.deleteIfExists(p);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (IOException | UncheckedIOException e) {
+            // the staging folder is hidden and temporary; leaving it behind is harmless
+        }
+    }
+
+    JsonObject resultsJson(AnalysisFile analysis, SimulationResult result) {
+        JsonObject root = new JsonObject();
+        root.addProperty("format", "faultbench-results");
+        root.addProperty("formatVersion", RESULTS_VERSION);
+        JsonObject program = new JsonObject();
+        program.addProperty("name", "Faultbench");
+        program.addProperty("version", programVersion);
+        root.add("program", program);
+        root.addProperty("study", result.studyName());
+        root.addProperty("analysisFile", analysis.file().toString());
+        root.addProperty("analysisSha256", analysis.sha256());
+        root.addProperty("seed", result.settings().seed());
+        root.addProperty("realisationsRequested", result.settings().realisations());
+        root.addProperty("realisationsRun", result.realisationsRun());
+        root.addProperty("complete", result.complete());
+        root.addProperty("threads", result.settings().threads());
+        JsonObject conventions = new JsonObject();
+        conventions.addProperty("depth", "metres TVDSS, positive down");
+        conventions.addProperty("volume", "stock-tank m3 (STOIIP); barrels = m3 x 6.2898");
+        conventions.addProperty("percentiles", "exceedance convention (PRMS): P90 = low case = 10th percentile,"
+                + " P10 = high case = 90th percentile; estimated in streaming form with the P2 algorithm");
+        root.add("conventions", conventions);
+        root.add("cautions", strings(CAUTIONS));
+        root.add("warnings", strings(result.warnings()));
+        JsonArray units = new JsonArray();
+        for (UnitSummary unit : result.units()) {
+            units.add(unitJson(unit));
+        }
+        root.add("units", units);
+        root.add("tornado", tornadoJson(result.tornado()));
+        JsonArray leaks = new JsonArray();
+        for (LeakProbabilityMap map : result.leakMaps()) {
+            JsonObject m = new JsonObject();
+            m.addProperty("fault", map.faultId());
+            m.addProperty("maximumProbability", map.maximum());
+            m.addProperty("file", "leak-probability-" + safe(map.faultId()) + ".csv");
+            m.addProperty("columns", map.columns());
+            m.addProperty("rows", map.rows());
+            m.addProperty("zTop", map.zTop());
+            m.addProperty("cellHeight", map.cellHeight());
+            leaks.add(m);
+        }
+        root.add("leakProbability", leaks);
+        root.add("inputs", analysis.document());
+        return root;
+    }
+
+    private static JsonArray strings(List<String> values) {
+        JsonArray array = new JsonArray();
+        values.forEach(array::add);
+        return array;
+    }
+
+    private static JsonObject unitJson(UnitSummary unit) {
+        JsonObject u = new JsonObject();
+        u.addProperty("name", unit.unitName());
+        JsonObject base = new JsonObject();
+        base.addProperty("mechanism", unit.baseMechanism().name());
+        LeakLocation at = unit.baseLeakLocation();
+        if (at != null) {
+            JsonObject leak = new JsonObject();
+            leak.addProperty("fault", at.faultId());
+            leak.addProperty("u", at.u());
+            leak.addProperty("z", at.z());
+            base.add("leakLocation", leak);
+        }
+        for (Map.Entry<UnitQuantity, Double> e : unit.baseCase().entrySet()) {
+            addNumber(base, key(e.getKey()), e.getValue());
+        }
+        u.add("baseCase", base);
+        JsonObject fractions = new JsonObject();
+        for (Map.Entry<Mechanism, Double> e : unit.mechanismFractions().entrySet()) {
+            fractions.addProperty(e.getKey().name(), e.getValue());
+        }
+        u.add("mechanismFractions", fractions);
+        JsonObject quantities = new JsonObject();
+        for (UnitQuantity q : UnitQuantity.values()) {
+            StreamingSummary s = unit.statistics(q);
+            JsonObject o = new JsonObject();
+            o.addProperty("label", q.label());
+            o.addProperty("unit", q.unit());
+            for (ExceedanceLevel level : ExceedanceLevel.values()) {
+                addNumber(o, level.name(), s.level(level));
+            }
+            addNumber(o, "mean", s.mean());
+            addNumber(o, "min", s.min());
+            addNumber(o, "max", s.max());
+            o.addProperty("finiteFraction", s.finiteFraction());
+            quantities.add(key(q), o);
+        }
+        u.add("quantities", quantities);
+        return u;
+    }
+
+    private static JsonObject tornadoJson(Map<String, List<TornadoBar>> tornado) {
+        JsonObject t = new JsonObject();
+        for (Map.Entry<String, List<TornadoBar>> e : tornado.entrySet()) {
+            JsonArray bars = new JsonArray();
+            for (TornadoBar bar : e.getValue()) {
+                JsonObject b = new JsonObject();
+                b.addProperty("input", bar.input());
+                addNumber(b, "contactWithP90Input", bar.contactWithLowInput());
+                addNumber(b, "contactWithP10Input", bar.contactWithHighInput());
+                b.addProperty("swing", bar.swing());
+                bars.add(b);
+            }
+            t.add(e.getKey(), bars);
+        }
+        return t;
+    }
+
+    /** JSON has no NaN or infinity: such values are written as null. */
+    private static void addNumber(JsonObject o, String key, double value) {
+        if (Double.isFinite(value)) {
+            o.addProperty(key, value);
+        } else {
+            o.add(key, com.google.gson.JsonNull.INSTANCE);
+        }
+    }
+
+    static String key(UnitQuantity q) {
+        String[] words = q.name().toLowerCase(Locale.ROOT).split("_");
+        StringBuilder key = new StringBuilder(words[0]);
+        for (int i = 1; i < words.length; i++) {
+            key.append(Character.toUpperCase(words[i].charAt(0))).append(words[i].substring(1));
+        }
+        return key.toString();
+    }
+
+    static String summaryCsv(SimulationResult result) {
+        StringBuilder csv = new StringBuilder(
+                "unit,quantity,measure,P90_low,P50,P10_high,mean,finite_fraction,base_case,base_mechanism\n");
+        for (UnitSummary unit : result.units()) {
+            for (UnitQuantity q : UnitQuantity.values()) {
+                StreamingSummary s = unit.statistics(q);
+                List<String> cells = new ArrayList<>(List.of(csvText(unit.unitName()), key(q), q.unit()));
+                for (ExceedanceLevel level : ExceedanceLevel.values()) {
+                    cells.add(number(s.level(level)));
+                }
+                cells.add(number(s.mean()));
+                cells.add(number(s.finiteFraction()));
+                cells.add(number(unit.baseCase().get(q)));
+                cells.add(unit.baseMechanism().name());
+                csv.append(String.join(",", cells)).append('\n');
+            }
+        }
+        return csv.toString();
+    }
+
+    private static String leakCsv(LeakProbabilityMap map) {
+        StringBuilder csv = new StringBuilder("u,z,probability\n");
+        for (int row = 0; row < map.rows(); row++) {
+            double z = map.zTop() + (row + 0.5) * map.cellHeight();
+            for (int c = 0; c < map.columns(); c++) {
+                double p = map.probability(c, row);
+                if (p > 0) {
+                    csv.append(number(map.u()[c])).append(',').append(number(z)).append(',').append(number(p))
+                            .append('\n');
+                }
+            }
+        }
+        return csv.toString();
+    }
+
+    private static String number(Double value) {
+        return value == null || !Double.isFinite(value) ? "" : String.format(Locale.ROOT, "%.6g", value);
+    }
+
+    private static String csvText(String text) {
+        return text.contains(",") || text.contains("\"") ? "\"" + text.replace("\"", "\"\"") + "\"" : text;
+    }
+}

@@ -1,0 +1,75 @@
+package org.faultbench.study;
+
+import java.util.List;
+
+import org.faultbench.core.uncertain.UncertainValue;
+
+/**
+ * Reads an uncertain input: a plain number (a fixed value) or an object with exactly one distribution key:
+ * <pre>
+ * 30
+ * {"normal": {"mean": 30, "sd": 4}}
+ * {"truncatedNormal": {"mean": 30, "sd": 4, "min": 20, "max": 40}}
+ * {"uniform": {"min": 20, "max": 40}}
+ * {"triangular": {"min": 20, "mode": 30, "max": 45}}
+ * {"lognormal": {"median": 100, "sigmaLn": 0.5}}
+ * </pre>
+ */
+final class UncertainValueFormat {
+    static final List<String> KINDS = List.of("normal", "truncatedNormal", "uniform", "triangular", "lognormal");
+
+    private UncertainValueFormat() {
+    }
+
+    static UncertainValue read(JsonNode node) throws StudyFormatException {
+        if (node.isNumber()) {
+            double value = node.number();
+            return wrap(node, () -> UncertainValue.fixed(value));
+        }
+        List<String> keys = node.keys();
+        if (keys.size() != 1 || !KINDS.contains(keys.get(0))) {
+            throw node.error("expected a number or one of " + KINDS + " with its parameters, found " + node.element());
+        }
+        String kind = keys.get(0);
+        JsonNode p = node.field(kind);
+        switch (kind) {
+        case "normal":
+            double mean = p.field("mean").number();
+            double sd = p.field("sd").number();
+            return wrap(p, () -> UncertainValue.normal(mean, sd));
+        case "truncatedNormal":
+            double tMean = p.field("mean").number();
+            double tSd = p.field("sd").number();
+            double tMin = p.field("min").number();
+            double tMax = p.field("max").number();
+            return wrap(p, () -> UncertainValue.truncatedNormal(tMean, tSd, tMin, tMax));
+        case "uniform":
+            double uMin = p.field("min").number();
+            double uMax = p.field("max").number();
+            return wrap(p, () -> UncertainValue.uniform(uMin, uMax));
+        case "triangular":
+            double a = p.field("min").number();
+            double c = p.field("mode").number();
+            double b = p.field("max").number();
+            return wrap(p, () -> UncertainValue.triangular(a, c, b));
+        default:
+            double median = p.field("median").number();
+            double sigma = p.field("sigmaLn").number();
+            return wrap(p, () -> UncertainValue.logNormal(median, sigma));
+        }
+    }
+
+    /** Builds a value, turning the model's own validation message into an error at this field. */
+    static <T> T wrap(JsonNode node, ModelStep<T> step) throws StudyFormatException {
+        try {
+            return step.build();
+        } catch (IllegalArgumentException e) {
+            throw node.error(e.getMessage(), e);
+        }
+    }
+
+    @FunctionalInterface
+    interface ModelStep<T> {
+        T build();
+    }
+}
