@@ -7,11 +7,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 class BatchCommandTest {
+    @TempDir
+    Path dir;
+
     private final ByteArrayOutputStream out = new ByteArrayOutputStream();
     private final ByteArrayOutputStream err = new ByteArrayOutputStream();
 
@@ -60,5 +65,23 @@ class BatchCommandTest {
         assertEquals(ExitCode.USAGE, run("analyze", "f.json", "--threads", "0"));
         assertEquals(ExitCode.USAGE, run("analyze"));
         assertEquals(ExitCode.USAGE, run("analyze", "f.json", "--colour", "red"));
+    }
+
+    @Test
+    void badAnalysisFileNamesTheFieldAndWritesNothing() throws Exception {
+        Path file = dir.resolve("broken.json");
+        Files.writeString(file, "{\"format\": \"faultbench-analysis\", \"formatVersion\": 1,"
+                + " \"stratigraphy\": {\"referenceUnit\": \"A\", \"units\": []}}");
+        Path outDir = dir.resolve("results");
+        assertEquals(ExitCode.BAD_INPUT, run("analyze", file.toString(), "--out", outDir.toString()));
+        String message = err.toString(StandardCharsets.UTF_8);
+        assertTrue(message.contains("broken.json") && message.contains("stratigraphy.referenceUnit"), message);
+        assertTrue(Files.notExists(outDir), "nothing is written when the input is bad");
+    }
+
+    @Test
+    void missingAnalysisFileIsBadInput() {
+        assertEquals(ExitCode.BAD_INPUT, run("analyze", dir.resolve("absent.json").toString()));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("not found"));
     }
 }

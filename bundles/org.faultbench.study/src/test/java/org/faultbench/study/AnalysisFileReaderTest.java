@@ -125,4 +125,15 @@ class AnalysisFileReaderTest {
         // triangular mean (a + b + c) / 3 = 32 (common practice)
         assertEquals(32, analysis.study().stratigraphy().units().get(1).thickness().nominal(), 1e-9);
     }
+
+    @Test
+    void co2ThresholdsAreScaledByInterfacialTensionAndContactAngle() throws Exception {
+        AnalysisFile oil = read(valid("sgr"));
+        assertEquals(1.0, oil.study().seal().thresholdScale(), 0);
+        AnalysisFile co2 = read(valid("sgr").replace("\"trapped\": \"oil\", \"density\": 750",
+                "\"trapped\": \"co2\", \"density\": 700, \"interfacialTension\": 0.025, \"contactAngle\": 40"));
+        // P_CO2 = P_oil * (0.025 cos 40) / (0.030 cos 0) (Purcell 1949; Schowalter 1979): 0.6384
+        assertEquals(0.025 * Math.cos(Math.toRadians(40)) / 0.030, co2.study().seal().thresholdScale(), 1e-12);
+        assertEquals(0.6384, co2.study().seal().thresholdScale(), 1e-4);
+    }
 }
