@@ -13,6 +13,12 @@ class FaultbenchWorkbenchAdvisor extends WorkbenchAdvisor {
         configurer.setSaveAndRestore(true);
     }
 
+    /** Opens the workspace's first study (e.g. the demo) so the views have something to show. */
+    @Override
+    public void postStartup() {
+        StudyLoadJob.firstWorkspaceStudy().ifPresent(file -> new StudyLoadJob(file).schedule());
+    }
+
     @Override
     public String getInitialWindowPerspectiveId() {
         return TrapStudyPerspective.ID;

@@ -1,0 +1,99 @@
+package org.faultbench.juxtaposition.ui;
+
+import org.faultbench.core.column.ResolvedColumn;
+import org.faultbench.faults.FaultPlaneColumns;
+import org.faultbench.faults.FaultPlaneSampler;
+import org.faultbench.juxtaposition.HungColumns;
+import org.faultbench.juxtaposition.JuxtapositionClass;
+import org.faultbench.juxtaposition.JuxtapositionRaster;
+import org.faultbench.sim.BoundingFault;
+import org.faultbench.sim.LeakProbabilityMap;
+import org.faultbench.sim.TrapStudy;
+
+/**
+ * What the Allan diagram shows for one bounding fault in the base case (every input at its nominal value): the
+ * juxtaposition raster on the unrolled fault plane, the unit boundaries of both walls and, after a run, the leak
+ * probability of each cell. Plain data; the canvas draws it.
+ */
+final class AllanPicture {
+    static final double CELL_HEIGHT = 2.5;
+    private static final double MARGIN = 30;
+
+    final String faultId;
+    final FaultPlaneColumns columns;
+    final ResolvedColumn column;
+    final int referenceUnit;
+    final JuxtapositionRaster raster;
+    final LeakProbabilityMap leak;
+
+    AllanPicture(TrapStudy study, BoundingFault fault, LeakProbabilityMap leak) {
+        this.faultId = fault.id();
+        this.columns = new FaultPlaneSampler(fault.columns()).sample(fault.fault(), fault.footwallCutOff(),
+                fault.hangingWallCutOff());
+        this.column = study.stratigraphy().nominal();
+        this.referenceUnit = study.stratigraphy().referenceUnitIndex();
+        HungColumns walls = new HungColumns(column, column, referenceUnit);
+        double top = Double.POSITIVE_INFINITY;
+        double base = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k < columns.count(); k++) {
+            if (columns.hasData(k)) {
+                top = Math.min(top, Math.min(columns.footwallDepth(k), columns.hangingWallDepth(k)));
+                base = Math.max(base, Math.max(columns.footwallDepth(k), columns.hangingWallDepth(k)));
+            }
+        }
+        top -= column.top(referenceUnit) + MARGIN;
+        base += column.thickness() - column.top(referenceUnit) + MARGIN;
+        this.raster = JuxtapositionRaster.paint(columns, walls, top, base, CELL_HEIGHT);
+        this.leak = leak;
+    }
+
+    double uMin() {
+        return columns.u(0) - columns.width() / 2;
+    }
+
+    double uMax() {
+        return columns.u(columns.count() - 1) + columns.width() / 2;
+    }
+
+    double zTop() {
+        return raster.top();
+    }
+
+    double zBase() {
+        return raster.top() + raster.rowCount() * raster.dz();
+    }
+
+    /** Depth of the top of {@code unit} on {@code footwall ? footwall : hanging wall} at column k. */
+    double unitTop(int k, int unit, boolean footwall) {
+        double cutOff = footwall ? columns.footwallDepth(k) : columns.hangingWallDepth(k);
+        return cutOff - column.top(referenceUnit) + column.top(unit);
+    }
+
+    /** Leak probability at (column k, depth z); 0 before a run or outside the counted frame. */
+    double leakProbability(int k, double z) {
+        if (leak == null || k >= leak.columns()) {
+            return 0;
+        }
+        int row = (int) Math.floor((z - leak.zTop()) / leak.cellHeight());
+        return row < 0 || row >= leak.rows() ? 0 : leak.probability(k, row);
+    }
+
+    String describe(int k, double z) {
+        int row = (int) Math.floor((z - raster.top()) / raster.dz());
+        if (k < 0 || k >= raster.columnCount() || row < 0 || row >= raster.rowCount() || !raster.hasData(k, row)) {
+            return "";
+        }
+        JuxtapositionClass c = raster.juxtapositionClass(k, row);
+        return String.format(java.util.Locale.ROOT, "u %.0f m, z %.1f m: footwall %s | hanging wall %s \u2014 %s,"
+                + " throw %.1f m, leak probability %.0f %%", columns.u(k), z, unitName(raster.footwallUnit(k, row)),
+                unitName(raster.hangingWallUnit(k, row)), c.name().toLowerCase(java.util.Locale.ROOT).replace('_', '/'),
+                raster.throwAt(k, row), 100 * leakProbability(k, z));
+    }
+
+    private String unitName(int unit) {
+        if (unit < 0) {
+            return "overburden";
+        }
+        return unit >= column.size() ? "underburden" : column.unit(unit).name();
+    }
+}
