@@ -17,6 +17,7 @@ import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
+import org.faultbench.core.units.VolumeUnit;
 import org.faultbench.sim.ExceedanceLevel;
 import org.faultbench.sim.LeakLocation;
 import org.faultbench.sim.LeakProbabilityMap;
@@ -183,10 +184,23 @@ public final class ResultsWriter {
             addNumber(o, "min", s.min());
             addNumber(o, "max", s.max());
             o.addProperty("finiteFraction", s.finiteFraction());
+            if ("m3".equals(q.unit())) {
+                o.add("stockTankBarrels", barrels(s));
+            }
             quantities.add(key(q), o);
         }
         u.add("quantities", quantities);
         return u;
+    }
+
+    /** The same statistics converted to stock-tank barrels (1 m3 = 6.2898 bbl). */
+    private static JsonObject barrels(StreamingSummary s) {
+        JsonObject bbl = new JsonObject();
+        for (ExceedanceLevel level : ExceedanceLevel.values()) {
+            addNumber(bbl, level.name(), VolumeUnit.BARREL.fromCubicMetres(s.level(level)));
+        }
+        addNumber(bbl, "mean", VolumeUnit.BARREL.fromCubicMetres(s.mean()));
+        return bbl;
     }
 
     private static JsonObject tornadoJson(Map<String, List<TornadoBar>> tornado) {

@@ -45,6 +45,11 @@ class ResultsWriterTest {
         assertEquals(result.units().get(0).statistics(UnitQuantity.CONTACT).level(ExceedanceLevel.P50),
                 contact.get("P50").getAsDouble(), 0);
         assertEquals("Dome test", json.getAsJsonObject("inputs").get("name").getAsString());
+        JsonObject stoiip = json.getAsJsonArray("units").get(0).getAsJsonObject().getAsJsonObject("quantities")
+                .getAsJsonObject("stoiip");
+        // 1 m3 = 6.2898 bbl (NIST SP 811: 1 bbl = 0.158987294928 m3)
+        assertEquals(stoiip.get("P50").getAsDouble() * 6.2898,
+                stoiip.getAsJsonObject("stockTankBarrels").get("P50").getAsDouble(), 1e-4 * stoiip.get("P50").getAsDouble());
 
         List<String> summary = Files.readAllLines(out.resolve("summary.csv"), StandardCharsets.UTF_8);
         assertTrue(summary.get(0).startsWith("unit,quantity,measure,P90_low,P50,P10_high"));
