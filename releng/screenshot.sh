@@ -15,13 +15,14 @@ WS=$(mktemp -d)
 cp -r "$FAULTBENCH_ROOT/demo-workspace/." "$WS/" 2>/dev/null || true
 trap 'kill $APP $XVFB 2>/dev/null; rm -rf "$WS"' EXIT
 sleep 1
-DISPLAY=$DISPLAY_NUM "$FAULTBENCH_PRODUCT/faultbench.sh" -data "$WS" >"$WS/console.log" 2>&1 &
+# -Dfaultbench.autorun runs the workspace's study on opening, so the picture shows results
+DISPLAY=$DISPLAY_NUM FAULTBENCH_VMARGS="-Dfaultbench.autorun=true" "$FAULTBENCH_PRODUCT/faultbench.sh" -data "$WS" >"$WS/console.log" 2>&1 &
 APP=$!
 for i in $(seq 1 60); do
   if DISPLAY=$DISPLAY_NUM xwininfo -root -tree 2>/dev/null | grep -q '"Faultbench'; then break; fi
   sleep 1
 done
-sleep 4
+sleep ${FAULTBENCH_SCREENSHOT_WAIT:-40}
 mkdir -p "$(dirname "$OUT")"
 DISPLAY=$DISPLAY_NUM import -window root "$OUT"
 echo "screenshot: $OUT"

@@ -1,9 +1,11 @@
 package org.faultbench.app;
 
 import java.io.IOException;
+import java.io.Reader;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
+import java.util.Properties;
 import java.util.stream.Stream;
 
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -35,12 +37,20 @@ public final class StudyLoadJob extends Job {
         }
     }
 
-    /** The first analysis file (by name) in the workspace's {@code studies} folder, if the workspace has one. */
+    /**
+     * The study to open at start-up: the one named by {@code study=} in the workspace's {@code workspace.properties},
+     * else the first analysis file (by name) in its {@code studies} folder.
+     */
     static Optional<Path> firstWorkspaceStudy() {
         if (Platform.getInstanceLocation() == null || Platform.getInstanceLocation().getURL() == null) {
             return Optional.empty();
         }
-        Path studies = Path.of(Platform.getInstanceLocation().getURL().getPath()).resolve("studies");
+        Path workspace = Path.of(Platform.getInstanceLocation().getURL().getPath());
+        Optional<Path> named = namedStudy(workspace);
+        if (named.isPresent()) {
+            return named;
+        }
+        Path studies = workspace.resolve("studies");
         if (!Files.isDirectory(studies)) {
             return Optional.empty();
         }
@@ -49,5 +59,20 @@ public final class StudyLoadJob extends Job {
         } catch (IOException e) {
             return Optional.empty();
         }
+    }
+
+    private static Optional<Path> namedStudy(Path workspace) {
+        Path settings = workspace.resolve("workspace.properties");
+        if (!Files.isRegularFile(settings)) {
+            return Optional.empty();
+        }
+        Properties properties = new Properties();
+        try (Reader in = Files.newBufferedReader(settings)) {
+            properties.load(in);
+        } catch (IOException e) {
+            return Optional.empty();
+        }
+        String study = properties.getProperty("study");
+        return study == null ? Optional.empty() : Optional.of(workspace.resolve(study.trim()));
     }
 }

@@ -21,11 +21,11 @@ public class TrapStudyPerspective implements IPerspectiveFactory {
     public void createInitialLayout(IPageLayout layout) {
         String editorArea = layout.getEditorArea();
         layout.setEditorAreaVisible(false);
-        layout.addView(MAP_VIEW, IPageLayout.LEFT, 0.35f, editorArea);
-        IFolderLayout right = layout.createFolder("org.faultbench.app.folder.right", IPageLayout.RIGHT, 0.70f, editorArea);
+        layout.addView(MAP_VIEW, IPageLayout.LEFT, 0.22f, editorArea);
+        IFolderLayout right = layout.createFolder("org.faultbench.app.folder.right", IPageLayout.RIGHT, 0.78f, editorArea);
         right.addView(STRAT_VIEW);
         right.addView(FAULT_VIEW);
-        layout.addView(RESULTS_VIEW, IPageLayout.BOTTOM, 0.62f, editorArea);
+        layout.addView(RESULTS_VIEW, IPageLayout.BOTTOM, 0.55f, editorArea);
         layout.addView(ALLAN_VIEW, IPageLayout.TOP, 0.5f, editorArea);
         layout.addShowViewShortcut(MAP_VIEW);
         layout.addShowViewShortcut(FAULT_VIEW);

@@ -26,7 +26,7 @@ final class ResultTable {
         out.printf(Locale.ROOT, "%n%s: %d realisations, seed %d%s%n", result.studyName(), result.realisationsRun(),
                 result.settings().seed(), result.complete() ? "" : " (cancelled: partial result)");
         out.println("P90 = low case (90 % exceedance), P10 = high case (10 % exceedance)");
-        out.printf(Locale.ROOT, "%-16s %-28s %12s %12s %12s  %s%n", "unit", "quantity", "P90 (low)", "P50",
+        out.printf(Locale.ROOT, "%-12s %-34s %12s %12s %12s  %s%n", "unit", "quantity", "P90 (low)", "P50",
                 "P10 (high)", "controlled by");
         for (UnitSummary unit : result.units()) {
             for (UnitQuantity q : SHOWN) {
@@ -34,7 +34,7 @@ final class ResultTable {
                 if (s.finiteFraction() == 0) {
                     continue;
                 }
-                out.printf(Locale.ROOT, "%-16s %-28s %12s %12s %12s  %s%n", unit.unitName(),
+                out.printf(Locale.ROOT, "%-12s %-34s %12s %12s %12s  %s%n", unit.unitName(),
                         q.label() + " [" + q.unit() + "]", format(s.level(ExceedanceLevel.P90)),
                         format(s.level(ExceedanceLevel.P50)), format(s.level(ExceedanceLevel.P10)),
                         q == UnitQuantity.CONTACT ? mechanisms(unit) : "");

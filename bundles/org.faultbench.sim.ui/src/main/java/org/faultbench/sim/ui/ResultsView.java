@@ -41,9 +41,15 @@ public class ResultsView extends ViewPart {
     private TableViewer table;
     private Combo tornadoUnit;
     private TornadoCanvas tornado;
+    /** Demonstrations and screenshots: -Dfaultbench.autorun=true runs every study as soon as it is opened. */
+    private static final boolean AUTORUN = Boolean.getBoolean("faultbench.autorun");
+
     private final ActiveStudy.Listener listener = source -> {
         if (status != null && !status.isDisposed()) {
             status.getDisplay().asyncExec(this::refresh);
+        }
+        if (AUTORUN && source.result().isEmpty()) {
+            source.analysis().ifPresent(a -> runSimulation(a.realisations()));
         }
     };
 
