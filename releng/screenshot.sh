@@ -9,7 +9,7 @@ faultbench_ensure_packages $FAULTBENCH_PACKAGES imagemagick x11-utils
 OUT=${1:-$FAULTBENCH_ROOT/docs/workbench.png}
 [ -x "$FAULTBENCH_PRODUCT/faultbench.sh" ] || { echo "build the product first: releng/run-tests.sh or ./mvnw -B -DskipTests verify" >&2; exit 1; }
 DISPLAY_NUM=:$(( 90 + $$ % 9 ))
-Xvfb $DISPLAY_NUM -screen 0 1280x900x24 -nolisten tcp >/dev/null 2>&1 &
+Xvfb $DISPLAY_NUM -screen 0 1600x1000x24 -nolisten tcp >/dev/null 2>&1 &
 XVFB=$!
 WS=$(mktemp -d)
 cp -r "$FAULTBENCH_ROOT/demo-workspace/." "$WS/" 2>/dev/null || true

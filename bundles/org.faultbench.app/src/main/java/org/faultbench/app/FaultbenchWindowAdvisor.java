@@ -1,6 +1,8 @@
 package org.faultbench.app;
 
 import org.eclipse.swt.graphics.Point;
+import org.eclipse.swt.graphics.Rectangle;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.application.ActionBarAdvisor;
 import org.eclipse.ui.application.IActionBarConfigurer;
 import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
@@ -21,7 +23,9 @@ class FaultbenchWindowAdvisor extends WorkbenchWindowAdvisor {
     @Override
     public void preWindowOpen() {
         IWorkbenchWindowConfigurer configurer = getWindowConfigurer();
-        configurer.setInitialSize(new Point(1200, 800));
+        // fill most of the primary monitor: diagrams and tables need the room
+        Rectangle screen = Display.getCurrent().getPrimaryMonitor().getClientArea();
+        configurer.setInitialSize(new Point(Math.min(1800, screen.width), Math.min(1100, screen.height)));
         configurer.setShowCoolBar(true);
         configurer.setShowStatusLine(true);
         configurer.setShowPerspectiveBar(true);

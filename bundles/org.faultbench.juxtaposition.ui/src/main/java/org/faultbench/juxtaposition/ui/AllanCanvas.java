@@ -162,6 +162,7 @@ final class AllanCanvas extends Canvas {
 
     private void drawDepthLines(GC gc, Rectangle p) {
         gc.setLineWidth(2);
+        int labelled = 0;
         for (DepthLine line : lines) {
             if (!Double.isFinite(line.z()) || line.z() < picture.zTop() || line.z() > picture.zBase()) {
                 continue;
@@ -171,7 +172,12 @@ final class AllanCanvas extends Canvas {
             gc.setLineStyle(line.style());
             int py = y(p, line.z());
             gc.drawLine(p.x, py, p.x + p.width, py);
-            gc.drawText(line.label() + " " + NumberText.of(line.z(), 1) + " m", p.x + 4, py - 15, true);
+            // labels alternate between the left and right ends so neighbouring lines stay readable
+            String label = line.label() + " " + NumberText.of(line.z(), 1) + " m";
+            int width = gc.textExtent(label).x;
+            int lx = labelled++ % 2 == 0 ? p.x + 4 : p.x + p.width - width - 4;
+            gc.setBackground(getDisplay().getSystemColor(SWT.COLOR_WHITE));
+            gc.drawText(label, lx, py - 16, false);
         }
         gc.setLineWidth(1);
         gc.setLineStyle(SWT.LINE_SOLID);
