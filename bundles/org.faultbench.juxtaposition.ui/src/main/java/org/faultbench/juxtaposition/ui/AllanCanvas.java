@@ -36,7 +36,19 @@ final class AllanCanvas extends Canvas {
     record DepthLine(String label, double z, RGB colour, int style) {
     }
 
+    /** What the cells are coloured by. */
+    enum Paint {
+        JUXTAPOSITION("juxtaposition"), SEAL_ATTRIBUTE("seal attribute"), LEAK_PROBABILITY("leak probability");
+
+        final String label;
+
+        Paint(String label) {
+            this.label = label;
+        }
+    }
+
     private AllanPicture picture;
+    private Paint paintMode = Paint.JUXTAPOSITION;
     private Image image;
     private final List<DepthLine> lines = new ArrayList<>();
 
@@ -50,6 +62,12 @@ final class AllanCanvas extends Canvas {
         picture = newPicture;
         lines.clear();
         lines.addAll(depthLines);
+        disposeImage();
+        redraw();
+    }
+
+    void paintBy(Paint mode) {
+        paintMode = mode;
         disposeImage();
         redraw();
     }
@@ -108,16 +126,31 @@ final class AllanCanvas extends Canvas {
             for (int row = 0; row < raster.rowCount(); row++) {
                 RGB colour = new RGB(255, 255, 255);
                 if (raster.hasData(k, row)) {
-                    JuxtapositionClass c = raster.juxtapositionClass(k, row);
-                    colour = c == JuxtapositionClass.RESERVOIR_RESERVOIR ? RESERVOIR_RESERVOIR
-                            : c == JuxtapositionClass.RESERVOIR_SEAL ? RESERVOIR_SEAL : SEAL_SEAL;
-                    double p = picture.leakProbability(k, raster.rowDepth(row));
-                    colour = blend(colour, LEAK, 0.85 * p);
+                    colour = cellColour(k, row);
                 }
                 data.setPixel(k, row, data.palette.getPixel(colour));
             }
         }
         return data;
+    }
+
+    private RGB cellColour(int k, int row) {
+        var raster = picture.raster;
+        JuxtapositionClass c = raster.juxtapositionClass(k, row);
+        RGB juxtaposition = c == JuxtapositionClass.RESERVOIR_RESERVOIR ? RESERVOIR_RESERVOIR
+                : c == JuxtapositionClass.RESERVOIR_SEAL ? RESERVOIR_SEAL : SEAL_SEAL;
+        double p = picture.leakProbability(k, raster.rowDepth(row));
+        switch (paintMode) {
+        case SEAL_ATTRIBUTE:
+            double value = picture.attributeAt(k, row);
+            // a clay-fraction attribute in % on a white-to-slate ramp; cells without fault rock keep their class
+            return Double.isNaN(value) ? blend(juxtaposition, new RGB(255, 255, 255), 0.6)
+                    : blend(new RGB(250, 250, 240), new RGB(40, 60, 90), Math.max(0, Math.min(1, value / 60)));
+        case LEAK_PROBABILITY:
+            return blend(blend(juxtaposition, new RGB(255, 255, 255), 0.7), LEAK, p);
+        default:
+            return blend(juxtaposition, LEAK, 0.85 * p);
+        }
     }
 
     static RGB blend(RGB a, RGB b, double t) {
@@ -209,7 +242,10 @@ final class AllanCanvas extends Canvas {
         x = swatch(gc, x, y, RESERVOIR_RESERVOIR, "reservoir/reservoir window");
         x = swatch(gc, x, y, RESERVOIR_SEAL, "reservoir/seal");
         x = swatch(gc, x, y, SEAL_SEAL, "seal/seal");
-        swatch(gc, x, y, LEAK, picture.leak == null ? "leak probability (after a run)" : "leak probability (0\u2013100 %)");
+        x = swatch(gc, x, y, LEAK, picture.leak == null ? "leak probability (after a run)" : "leak probability (0\u2013100 %)");
+        if (paintMode == Paint.SEAL_ATTRIBUTE && picture.sealAttribute != null) {
+            swatch(gc, x, y, new RGB(40, 60, 90), picture.sealAttribute + " 0 (pale) \u2013 60+ (slate)");
+        }
     }
 
     private int swatch(GC gc, int x, int y, RGB rgb, String label) {

@@ -38,6 +38,7 @@ public class AllanDiagramView extends ViewPart {
 
     private Combo faultCombo;
     private Combo unitCombo;
+    private Combo paintCombo;
     private Label readout;
     private AllanCanvas canvas;
     private final ActiveStudy.Listener listener = source -> {
@@ -48,7 +49,7 @@ public class AllanDiagramView extends ViewPart {
 
     @Override
     public void createPartControl(Composite parent) {
-        parent.setLayout(new GridLayout(4, false));
+        parent.setLayout(new GridLayout(6, false));
         CautionBanner.create(parent);
         new Label(parent, SWT.NONE).setText("Fault:");
         faultCombo = new Combo(parent, SWT.READ_ONLY);
@@ -56,10 +57,18 @@ public class AllanDiagramView extends ViewPart {
         new Label(parent, SWT.NONE).setText("Contacts of unit:");
         unitCombo = new Combo(parent, SWT.READ_ONLY);
         unitCombo.addListener(SWT.Selection, e -> redrawDiagram());
+        new Label(parent, SWT.NONE).setText("Colour by:");
+        paintCombo = new Combo(parent, SWT.READ_ONLY);
+        for (AllanCanvas.Paint mode : AllanCanvas.Paint.values()) {
+            paintCombo.add(mode.label);
+        }
+        paintCombo.select(0);
+        paintCombo.addListener(SWT.Selection,
+                e -> canvas.paintBy(AllanCanvas.Paint.values()[paintCombo.getSelectionIndex()]));
         canvas = new AllanCanvas(parent);
-        canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1));
+        canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 6, 1));
         readout = new Label(parent, SWT.NONE);
-        readout.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        readout.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 6, 1));
         readout.setText("Juxtaposition on the unrolled fault plane: footwall and hanging-wall units and reservoir windows.");
         canvas.addListener(SWT.MouseMove, e -> {
             double[] at = canvas.toPlane(e.x, e.y);

@@ -8,6 +8,7 @@ import org.faultbench.juxtaposition.JuxtapositionClass;
 import org.faultbench.juxtaposition.JuxtapositionRaster;
 import org.faultbench.sim.BoundingFault;
 import org.faultbench.sim.LeakProbabilityMap;
+import org.faultbench.sim.SealAttributePainter;
 import org.faultbench.sim.TrapStudy;
 
 /**
@@ -25,6 +26,8 @@ final class AllanPicture {
     final int referenceUnit;
     final JuxtapositionRaster raster;
     final LeakProbabilityMap leak;
+    /** Name of the seal attribute painted on the raster (e.g. "SGR [%]"); null for juxtaposition only. */
+    final String sealAttribute;
 
     AllanPicture(TrapStudy study, BoundingFault fault, LeakProbabilityMap leak) {
         this.faultId = fault.id();
@@ -45,6 +48,9 @@ final class AllanPicture {
         base += column.thickness() - column.top(referenceUnit) + MARGIN;
         this.raster = JuxtapositionRaster.paint(columns, walls, top, base, CELL_HEIGHT);
         this.leak = leak;
+        this.sealAttribute = study.seal().juxtapositionOnly() ? null
+                : SealAttributePainter.paint(raster, columns, column, referenceUnit, study.seal().criterion(),
+                        study.seal().burialDepth());
     }
 
     double uMin() {
@@ -84,10 +90,17 @@ final class AllanPicture {
             return "";
         }
         JuxtapositionClass c = raster.juxtapositionClass(k, row);
+        String attribute = sealAttribute == null ? ""
+                : String.format(java.util.Locale.ROOT, ", %s %.1f", sealAttribute, attributeAt(k, row));
         return String.format(java.util.Locale.ROOT, "u %.0f m, z %.1f m: footwall %s | hanging wall %s \u2014 %s,"
-                + " throw %.1f m, leak probability %.0f %%", columns.u(k), z, unitName(raster.footwallUnit(k, row)),
+                + " throw %.1f m%s, leak probability %.0f %%", columns.u(k), z, unitName(raster.footwallUnit(k, row)),
                 unitName(raster.hangingWallUnit(k, row)), c.name().toLowerCase(java.util.Locale.ROOT).replace('_', '/'),
-                raster.throwAt(k, row), 100 * leakProbability(k, z));
+                raster.throwAt(k, row), attribute, 100 * leakProbability(k, z));
+    }
+
+    /** The painted seal attribute of a cell; NaN where none was painted. */
+    double attributeAt(int k, int row) {
+        return sealAttribute == null ? Double.NaN : raster.attribute(sealAttribute)[raster.cellIndex(k, row)];
     }
 
     private String unitName(int unit) {
