@@ -151,6 +151,15 @@ public final class CutOffLine {
         return interpolant.isValidPoint(u) ? interpolant.value(u) : Double.NaN;
     }
 
+    /**
+     * Depth at {@code u}: a station's own depth where {@code u} is a station, otherwise {@link #depthAt(double)}.
+     * A station next to a gap keeps its depth here, so lines cut or differenced at their stations do not lose data.
+     */
+    public double stationOrInterpolatedDepth(double u) {
+        int station = Arrays.binarySearch(this.u, u);
+        return station >= 0 ? z[station] : depthAt(u);
+    }
+
     public String faultId() {
         return faultId;
     }

@@ -1,0 +1,68 @@
+package org.faultbench.faults.qc;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The fault QC rules of a project, by id, in registration order, and the run of all of them over one fault. Plain
+ * Java so that QC runs headless; the extension point adds in-house rules through {@link QcRuleContributions}.
+ */
+public final class QcRuleCatalog {
+
+    private final Map<String, FaultQcRule> rules = new LinkedHashMap<>();
+
+    /** A catalog with the built-in rules in their default settings. */
+    public static QcRuleCatalog withBuiltIns() {
+        QcRuleCatalog catalog = new QcRuleCatalog();
+        catalog.register(new PolarityFlipRule());
+        catalog.register(new TipThrowRule());
+        catalog.register(new ThrowGradientRule());
+        catalog.register(new ThrowMinimumRule());
+        catalog.register(new DisplacementLengthRule());
+        catalog.register(new DeeperLessThrowRule());
+        catalog.register(new CrossingCutOffRule());
+        catalog.register(new WallOrderRule());
+        return catalog;
+    }
+
+    /** @throws IllegalArgumentException when the rule or its id is missing or the id is already taken */
+    public synchronized void register(FaultQcRule rule) {
+        if (rule == null || rule.id() == null || rule.id().isBlank()) {
+            throw new IllegalArgumentException("fault QC rule or its id is missing: " + rule);
+        }
+        if (rules.containsKey(rule.id())) {
+            throw new IllegalArgumentException("fault QC rule id '" + rule.id() + "' is already registered by "
+                    + rules.get(rule.id()).name());
+        }
+        rules.put(rule.id(), rule);
+    }
+
+    public synchronized Optional<FaultQcRule> find(String id) {
+        return Optional.ofNullable(rules.get(id));
+    }
+
+    public synchronized List<FaultQcRule> list() {
+        return List.copyOf(rules.values());
+    }
+
+    /**
+     * Findings of every rule on one fault, rule by rule. A rule that fails is reported as an error finding of that
+     * rule instead of stopping the others, so one broken in-house rule cannot hide the built-in checks.
+     */
+    public List<QcFinding> check(FaultQcContext ctx) {
+        List<QcFinding> findings = new ArrayList<>();
+        for (FaultQcRule rule : list()) {
+            try {
+                findings.addAll(rule.check(ctx));
+            } catch (RuntimeException e) {
+                findings.add(new QcFinding(rule.id(), Severity.ERROR, ctx.fault().id(), Double.NaN, null,
+                        "QC rule '" + rule.name() + "' failed on fault '" + ctx.fault().name() + "': " + e,
+                        "The other rules ran normally; report this failure to the rule's author."));
+            }
+        }
+        return findings;
+    }
+}
