@@ -1,6 +1,5 @@
 package org.faultbench.faults.qc;
 
-import java.util.ArrayList;
 import java.util.List;
 
 import org.faultbench.faults.profile.ThrowProfile;
@@ -11,7 +10,7 @@ import org.faultbench.faults.profile.ThrowProfile;
  * sometimes swapped walls or mis-picked horizons (common practice). Scissor faults that really flip are rare in
  * normal-fault systems.
  */
-public final class PolarityFlipRule implements FaultQcRule {
+public final class PolarityFlipRule extends ProfileScanRule {
 
     public static final String ID = "throw-polarity-flip";
     /** Throws smaller than this have no reliable sign (a few metres; set to the data's vertical resolution). */
@@ -25,37 +24,22 @@ public final class PolarityFlipRule implements FaultQcRule {
 
     /** @param resolution throws of at most this size (m) count as zero */
     public PolarityFlipRule(double resolution) {
+        super(ID, "Throw polarity flip", Severity.WARNING);
         this.resolution = Thresholds.nonNegative(ID, "throw resolution", resolution);
     }
 
     @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String name() {
-        return "Throw polarity flip";
-    }
-
-    @Override
-    public List<QcFinding> check(FaultQcContext ctx) {
-        List<QcFinding> findings = new ArrayList<>();
-        for (ThrowProfile profile : ctx.throwProfiles()) {
-            double[] u = profile.validU();
-            double[] t = profile.validThrows();
-            int last = -1;
-            for (int i = 0; i < t.length; i++) {
-                if (Math.abs(t[i]) <= resolution) {
-                    continue;
-                }
-                if (last >= 0 && Math.signum(t[i]) != Math.signum(t[last])) {
-                    findings.add(finding(ctx, profile, u, t, last, i));
-                }
-                last = i;
+    void scan(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] t, List<QcFinding> findings) {
+        int last = -1;
+        for (int i = 0; i < t.length; i++) {
+            if (Math.abs(t[i]) <= resolution) {
+                continue;
             }
+            if (last >= 0 && Math.signum(t[i]) != Math.signum(t[last])) {
+                findings.add(finding(ctx, profile, u, t, last, i));
+            }
+            last = i;
         }
-        return findings;
     }
 
     private QcFinding finding(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] t, int before,
@@ -68,7 +52,7 @@ public final class PolarityFlipRule implements FaultQcRule {
         String suggestion = "Check whether two faults dipping in opposite directions were joined across a relay here;"
                 + " if so, split the fault at u = " + Numbers.metres(flip) + " and swap the walls of the part with"
                 + " the wrong sense of throw. Otherwise check the wall assignment and the horizon picks.";
-        return new QcFinding(ID, Severity.WARNING, ctx.fault().id(), flip, profile.horizon(), message, suggestion);
+        return finding(ctx, profile, flip, message, suggestion);
     }
 
     /** Zero crossing between neighbouring stations; across a near-zero stretch, its station of least throw. */

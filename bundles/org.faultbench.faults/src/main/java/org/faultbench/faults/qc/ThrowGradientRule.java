@@ -1,6 +1,5 @@
 package org.faultbench.faults.qc;
 
-import java.util.ArrayList;
 import java.util.List;
 
 import org.faultbench.faults.profile.ThrowProfile;
@@ -10,7 +9,7 @@ import org.faultbench.faults.profile.ThrowProfile;
  * most often a mis-picked cut-off or a wrongly correlated horizon, sometimes the boundary of linked segments or a
  * crossing fault (common practice). One finding per run of steep steps, at its steepest step.
  */
-public final class ThrowGradientRule implements FaultQcRule {
+public final class ThrowGradientRule extends ProfileScanRule {
 
     public static final String ID = "throw-gradient";
     /**
@@ -33,42 +32,27 @@ public final class ThrowGradientRule implements FaultQcRule {
      * @param resolution throw changes (m) of at most this size pass
      */
     public ThrowGradientRule(double maxGradient, double resolution) {
+        super(ID, "Abrupt throw gradient", Severity.WARNING);
         this.maxGradient = Thresholds.nonNegative(ID, "maximum throw gradient", maxGradient);
         this.resolution = Thresholds.nonNegative(ID, "throw resolution", resolution);
     }
 
     @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String name() {
-        return "Abrupt throw gradient";
-    }
-
-    @Override
-    public List<QcFinding> check(FaultQcContext ctx) {
-        List<QcFinding> findings = new ArrayList<>();
-        for (ThrowProfile profile : ctx.throwProfiles()) {
-            double[] u = profile.validU();
-            double[] t = profile.validThrows();
-            int steepest = -1;
-            for (int i = 0; i + 1 < u.length; i++) {
-                boolean steep = isSteep(u, t, i);
-                if (steep && (steepest < 0 || gradient(u, t, i) > gradient(u, t, steepest))) {
-                    steepest = i;
-                }
-                if (!steep && steepest >= 0) {
-                    findings.add(finding(ctx, profile, u, t, steepest));
-                    steepest = -1;
-                }
+    void scan(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] t, List<QcFinding> findings) {
+        int steepest = -1;
+        for (int i = 0; i + 1 < u.length; i++) {
+            boolean steep = isSteep(u, t, i);
+            if (steep && (steepest < 0 || gradient(u, t, i) > gradient(u, t, steepest))) {
+                steepest = i;
             }
-            if (steepest >= 0) {
+            if (!steep && steepest >= 0) {
                 findings.add(finding(ctx, profile, u, t, steepest));
+                steepest = -1;
             }
         }
-        return findings;
+        if (steepest >= 0) {
+            findings.add(finding(ctx, profile, u, t, steepest));
+        }
     }
 
     private boolean isSteep(double[] u, double[] t, int i) {
@@ -88,6 +72,6 @@ public final class ThrowGradientRule implements FaultQcRule {
         String suggestion = "Check the footwall and hanging-wall cut-off picks here for a mis-pick or a horizon"
                 + " correlated across the wrong reflector; a real step may mark a segment boundary or a crossing"
                 + " fault.";
-        return new QcFinding(ID, Severity.WARNING, ctx.fault().id(), middle, profile.horizon(), message, suggestion);
+        return finding(ctx, profile, middle, message, suggestion);
     }
 }

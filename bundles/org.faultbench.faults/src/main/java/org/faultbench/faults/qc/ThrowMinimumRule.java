@@ -10,7 +10,7 @@ import org.faultbench.faults.profile.ThrowProfile;
  * keep a throw low at their former relay (Peacock &amp; Sanderson 1991, from memory); a deep minimum therefore marks
  * a possible relay or segment boundary, or a mis-pick. One finding per trough, at its lowest station.
  */
-public final class ThrowMinimumRule implements FaultQcRule {
+public final class ThrowMinimumRule extends ProfileScanRule {
 
     public static final String ID = "throw-minimum";
     /** A trough must be at least this fraction below the lower of the maxima on either side. */
@@ -30,34 +30,19 @@ public final class ThrowMinimumRule implements FaultQcRule {
      * @param resolution troughs of at most this depth (m) pass
      */
     public ThrowMinimumRule(double depthFraction, double resolution) {
+        super(ID, "Local throw minimum", Severity.WARNING);
         this.depthFraction = Thresholds.fraction(ID, "trough depth fraction", depthFraction);
         this.resolution = Thresholds.nonNegative(ID, "throw resolution", resolution);
     }
 
     @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String name() {
-        return "Local throw minimum";
-    }
-
-    @Override
-    public List<QcFinding> check(FaultQcContext ctx) {
-        List<QcFinding> findings = new ArrayList<>();
-        for (ThrowProfile profile : ctx.throwProfiles()) {
-            double[] u = profile.validU();
-            double[] size = profile.validThrows();
-            for (int i = 0; i < size.length; i++) {
-                size[i] = Math.abs(size[i]);
-            }
-            for (int lowest : troughs(size)) {
-                findings.add(finding(ctx, profile, u, size, lowest));
-            }
+    void scan(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] size, List<QcFinding> findings) {
+        for (int i = 0; i < size.length; i++) {
+            size[i] = Math.abs(size[i]);
         }
-        return findings;
+        for (int lowest : troughs(size)) {
+            findings.add(finding(ctx, profile, u, size, lowest));
+        }
     }
 
     /**
@@ -100,7 +85,6 @@ public final class ThrowMinimumRule implements FaultQcRule {
         String suggestion = "A marked throw minimum often marks a relay ramp or the boundary of two linked segments:"
                 + " check whether two overlapping faults were joined here and split the fault if so; otherwise check"
                 + " the cut-off picks.";
-        return new QcFinding(ID, Severity.WARNING, ctx.fault().id(), u[lowest], profile.horizon(), message,
-                suggestion);
+        return finding(ctx, profile, u[lowest], message, suggestion);
     }
 }

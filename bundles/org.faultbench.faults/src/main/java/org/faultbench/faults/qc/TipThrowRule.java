@@ -1,6 +1,5 @@
 package org.faultbench.faults.qc;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -14,7 +13,7 @@ import org.locationtech.jts.geom.Envelope;
  * at an end means the trace stops short of the tip or the fault links with another segment, unless the fault abuts
  * another fault or leaves the mapped area there (common practice).
  */
-public final class TipThrowRule implements FaultQcRule {
+public final class TipThrowRule extends ProfileScanRule {
 
     public static final String ID = "throw-at-tip";
     /** Smallest end throw (m) worth a finding: below this a tip is within seismic resolution. */
@@ -38,38 +37,23 @@ public final class TipThrowRule implements FaultQcRule {
      * @param snapDistance an end this close (m) to another fault or to the map edge is explained
      */
     public TipThrowRule(double minimumThrow, double fractionOfMaximum, double snapDistance) {
+        super(ID, "Throw at a fault end", Severity.WARNING);
         this.minimumThrow = Thresholds.nonNegative(ID, "minimum end throw", minimumThrow);
         this.fractionOfMaximum = Thresholds.fraction(ID, "fraction of the largest throw", fractionOfMaximum);
         this.snapDistance = Thresholds.nonNegative(ID, "snap distance", snapDistance);
     }
 
     @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String name() {
-        return "Throw at a fault end";
-    }
-
-    @Override
-    public List<QcFinding> check(FaultQcContext ctx) {
-        List<QcFinding> findings = new ArrayList<>();
-        for (ThrowProfile profile : ctx.throwProfiles()) {
-            double[] u = profile.validU();
-            double[] t = profile.validThrows();
-            if (u.length == 0) {
-                continue;
-            }
-            double limit = Math.max(minimumThrow, fractionOfMaximum * profile.maxAbsThrow());
-            for (int end : new int[] {0, u.length - 1}) {
-                if (Math.abs(t[end]) > limit && !explained(ctx, u[end])) {
-                    findings.add(finding(ctx, profile, u[end], t[end]));
-                }
+    void scan(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] t, List<QcFinding> findings) {
+        if (u.length == 0) {
+            return;
+        }
+        double limit = Math.max(minimumThrow, fractionOfMaximum * profile.maxAbsThrow());
+        for (int end : new int[] {0, u.length - 1}) {
+            if (Math.abs(t[end]) > limit && !explained(ctx, u[end])) {
+                findings.add(finding(ctx, profile, u[end], t[end]));
             }
         }
-        return findings;
     }
 
     private boolean explained(FaultQcContext ctx, double u) {
@@ -91,6 +75,6 @@ public final class TipThrowRule implements FaultQcRule {
                 + " no other fault and no map edge lies within " + Numbers.metres(snapDistance) + " of that end.";
         String suggestion = "Extend the trace to where the throw dies out, or join it to the fault it links with."
                 + " If the horizon is eroded or the data end here, the finding can be ignored.";
-        return new QcFinding(ID, Severity.WARNING, ctx.fault().id(), u, profile.horizon(), message, suggestion);
+        return finding(ctx, profile, u, message, suggestion);
     }
 }

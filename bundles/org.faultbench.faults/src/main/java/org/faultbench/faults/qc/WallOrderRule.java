@@ -1,6 +1,5 @@
 package org.faultbench.faults.qc;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 
@@ -13,7 +12,7 @@ import org.faultbench.faults.profile.ThrowProfile;
  * were joined into one (see {@link PolarityFlipRule}). One finding per stretch of wrong-sense throw, at its largest
  * value.
  */
-public final class WallOrderRule implements FaultQcRule {
+public final class WallOrderRule extends ProfileScanRule {
 
     public static final String ID = "footwall-below-hanging-wall";
     /** Wrong-sense throws up to this many metres are picking noise. */
@@ -27,42 +26,27 @@ public final class WallOrderRule implements FaultQcRule {
 
     /** @param resolution wrong-sense throws (m) of at most this size pass */
     public WallOrderRule(double resolution) {
+        super(ID, "Footwall below hanging wall", Severity.ERROR);
         this.resolution = Thresholds.nonNegative(ID, "throw resolution", resolution);
     }
 
     @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String name() {
-        return "Footwall below hanging wall";
-    }
-
-    @Override
-    public List<QcFinding> check(FaultQcContext ctx) {
-        List<QcFinding> findings = new ArrayList<>();
+    void scan(FaultQcContext ctx, ThrowProfile profile, double[] u, double[] t, List<QcFinding> findings) {
         double sense = ctx.fault().isNormal() ? 1 : -1;
-        for (ThrowProfile profile : ctx.throwProfiles()) {
-            double[] u = profile.validU();
-            double[] t = profile.validThrows();
-            boolean whole = Arrays.stream(t).noneMatch(value -> sense * value > resolution);
-            int worst = -1;
-            int start = -1;
-            for (int i = 0; i <= u.length; i++) {
-                boolean wrong = i < u.length && sense * t[i] < -resolution;
-                if (wrong) {
-                    start = start < 0 ? i : start;
-                    worst = worst < 0 || Math.abs(t[i]) > Math.abs(t[worst]) ? i : worst;
-                } else if (worst >= 0) {
-                    findings.add(finding(ctx, profile, u[start], u[i - 1], u[worst], t[worst], whole));
-                    worst = -1;
-                    start = -1;
-                }
+        boolean whole = Arrays.stream(t).noneMatch(value -> sense * value > resolution);
+        int worst = -1;
+        int start = -1;
+        for (int i = 0; i <= u.length; i++) {
+            boolean wrong = i < u.length && sense * t[i] < -resolution;
+            if (wrong) {
+                start = start < 0 ? i : start;
+                worst = worst < 0 || Math.abs(t[i]) > Math.abs(t[worst]) ? i : worst;
+            } else if (worst >= 0) {
+                findings.add(finding(ctx, profile, u[start], u[i - 1], u[worst], t[worst], whole));
+                worst = -1;
+                start = -1;
             }
         }
-        return findings;
     }
 
     private QcFinding finding(FaultQcContext ctx, ThrowProfile profile, double from, double to, double at,
@@ -80,6 +64,6 @@ public final class WallOrderRule implements FaultQcRule {
                 : "Only part of the fault has the wrong sense: probably two faults were joined into one. Split the"
                         + " fault where the throw changes sign and swap the walls of the wrong part; otherwise check"
                         + " the cut-off picks.";
-        return new QcFinding(ID, Severity.ERROR, ctx.fault().id(), at, profile.horizon(), message, suggestion);
+        return finding(ctx, profile, at, message, suggestion);
     }
 }
