@@ -10,12 +10,14 @@ import java.util.Arrays;
 public final class ColumnIntervals {
 
     private static final int INITIAL_CAPACITY = 16;
+    private static final JuxtapositionClass[] CLASSES = JuxtapositionClass.values();
 
     private double[] top = new double[INITIAL_CAPACITY];
     private double[] base = new double[INITIAL_CAPACITY];
     private int[] footwallUnit = new int[INITIAL_CAPACITY];
     private int[] hangingWallUnit = new int[INITIAL_CAPACITY];
-    private JuxtapositionClass[] classes = new JuxtapositionClass[INITIAL_CAPACITY];
+    /** Ordinals, not references: storing a reference costs a garbage-collector write barrier in the hot loop. */
+    private byte[] classes = new byte[INITIAL_CAPACITY];
     private int count;
 
     /** Empties the buffer, growing it (the only allocation) if it cannot hold {@code capacity} intervals. */
@@ -35,7 +37,7 @@ public final class ColumnIntervals {
         base[count] = intervalBase;
         footwallUnit[count] = footwall;
         hangingWallUnit[count] = hangingWall;
-        classes[count++] = juxtaposition;
+        classes[count++] = (byte) juxtaposition.ordinal();
     }
 
     public int count() {
@@ -67,6 +69,6 @@ public final class ColumnIntervals {
     }
 
     public JuxtapositionClass juxtapositionClass(int n) {
-        return classes[n];
+        return CLASSES[classes[n]];
     }
 }

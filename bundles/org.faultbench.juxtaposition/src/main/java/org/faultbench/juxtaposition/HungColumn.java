@@ -1,5 +1,7 @@
 package org.faultbench.juxtaposition;
 
+import java.util.stream.IntStream;
+
 import org.faultbench.core.column.ResolvedColumn;
 
 /**
@@ -14,6 +16,8 @@ public final class HungColumn {
     private final int referenceUnit;
     private final double[] boundaries;
     private final boolean[] reservoir;
+    /** Indexes of the reservoir units, shallowest first. */
+    private final int[] reservoirUnits;
 
     HungColumn(ResolvedColumn column, int referenceUnit, String wallName) {
         if (column == null) {
@@ -33,6 +37,7 @@ public final class HungColumn {
         for (int i = 0; i < column.size(); i++) {
             reservoir[i + 1] = column.unit(i).reservoir();
         }
+        this.reservoirUnits = IntStream.range(0, column.size()).filter(i -> reservoir[i + 1]).toArray();
     }
 
     public ResolvedColumn column() {
@@ -73,5 +78,14 @@ public final class HungColumn {
 
     double boundary(int index) {
         return boundaries[index];
+    }
+
+    int reservoirCount() {
+        return reservoirUnits.length;
+    }
+
+    /** The {@code n}-th reservoir unit from the top. */
+    int reservoirUnit(int n) {
+        return reservoirUnits[n];
     }
 }

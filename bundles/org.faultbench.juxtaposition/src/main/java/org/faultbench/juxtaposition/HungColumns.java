@@ -70,6 +70,44 @@ public final class HungColumns {
         }
     }
 
+    /**
+     * Fills {@code out} with the reservoir-against-reservoir intervals of {@link #juxtapose} that start shallower than
+     * {@code shallowerThan}, shallowest first: the same intervals, to the last bit, found by pairing the reservoir
+     * units of the two walls instead of walking every unit boundary. Leak-point searches in Monte Carlo loops look at
+     * nothing else, and usually only down to some depth, so they skip the sealing intervals and the deep ones.
+     *
+     * @param shallowerThan depth below which no interval is wanted; +infinity for all
+     */
+    public void juxtaposeReservoirs(double footwallCutOff, double hangingWallCutOff, double shallowerThan,
+            ColumnIntervals out) {
+        checkDepth("footwall", footwallCutOff);
+        checkDepth("hanging-wall", hangingWallCutOff);
+        out.reset(footwall.reservoirCount() + hangingWall.reservoirCount());
+        int a = 0;
+        int b = 0;
+        while (a < footwall.reservoirCount() && b < hangingWall.reservoirCount()) {
+            int i = footwall.reservoirUnit(a);
+            int j = hangingWall.reservoirUnit(b);
+            // the expressions of juxtapose(), so that tops and bases are the same doubles
+            double top = Math.max(footwallCutOff + footwall.boundary(i), hangingWallCutOff + hangingWall.boundary(j));
+            if (!(top < shallowerThan)) {
+                return; // both walls only go deeper from here
+            }
+            double footwallBase = footwallCutOff + footwall.boundary(i + 1);
+            double hangingWallBase = hangingWallCutOff + hangingWall.boundary(j + 1);
+            double base = Math.min(footwallBase, hangingWallBase);
+            if (top < base) {
+                out.add(top, base, i, j, JuxtapositionClass.RESERVOIR_RESERVOIR);
+            }
+            if (footwallBase <= hangingWallBase) {
+                a++;
+            }
+            if (hangingWallBase <= footwallBase) {
+                b++;
+            }
+        }
+    }
+
     private static void checkDepth(String wall, double depth) {
         if (!Double.isFinite(depth)) {
             throw new IllegalArgumentException(wall + " cut-off depth must be a finite number, was " + depth);

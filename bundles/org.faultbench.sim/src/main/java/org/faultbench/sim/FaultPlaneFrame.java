@@ -27,7 +27,9 @@ final class FaultPlaneFrame {
     /** Leak-probability cells: rows of height {@link #cellHeight} from {@link #zTop} down. */
     final double zTop;
     final double cellHeight;
+    private final double inverseCellHeight;
     final int rows;
+    private final double[] rowCentres;
 
     FaultPlaneFrame(BoundingFault bounding, int index, double crestX, double crestY, ResolvedColumn nominal,
             int referenceUnit, double cellHeight) {
@@ -64,9 +66,14 @@ final class FaultPlaneFrame {
         compartmentWall = bounding.fault().wallAt(crestX, crestY).orElseThrow(() -> new IllegalArgumentException(
                 "the compartment crest lies on the trace of fault '" + bounding.id() + "'"));
         this.cellHeight = cellHeight;
+        this.inverseCellHeight = 1 / cellHeight;
         zTop = shallowest - nominal.top(referenceUnit) - MARGIN;
         double zBase = deepest + (nominal.thickness() - nominal.top(referenceUnit)) + MARGIN;
         rows = (int) Math.ceil((zBase - zTop) / cellHeight);
+        rowCentres = new double[rows];
+        for (int row = 0; row < rows; row++) {
+            rowCentres[row] = zTop + (row + 0.5) * cellHeight;
+        }
     }
 
     boolean compartmentOnFootwall() {
@@ -77,6 +84,14 @@ final class FaultPlaneFrame {
         return rows * columns;
     }
 
+    /**
+     * Index of a cell in the leak counts of a realisation block: column by column, so that the cells of one column,
+     * which the leak search marks one after the other, lie side by side in memory.
+     */
+    int cell(int column, int row) {
+        return column * rows + row;
+    }
+
     /** Row of the cell containing depth z, or -1 / rows outside the frame. */
     int row(double z) {
         double r = Math.floor((z - zTop) / cellHeight);
@@ -84,6 +99,22 @@ final class FaultPlaneFrame {
     }
 
     double rowCentre(int row) {
-        return zTop + (row + 0.5) * cellHeight;
+        return rowCentres[row];
+    }
+
+    /**
+     * The first row whose centre lies at or below depth z (0 .. rows). Exact for the centres {@link #rowCentre} gives:
+     * the estimate from the reciprocal height may be off by one either way, and the steps after it correct that.
+     */
+    int firstRowCentredAtOrBelow(double z) {
+        double estimate = Math.ceil((z - zTop) * inverseCellHeight - 0.5);
+        int row = estimate < 0 ? 0 : (int) Math.min(estimate, rows);
+        while (row > 0 && rowCentre(row - 1) >= z) {
+            row--;
+        }
+        while (row < rows && rowCentre(row) < z) {
+            row++;
+        }
+        return row;
     }
 }

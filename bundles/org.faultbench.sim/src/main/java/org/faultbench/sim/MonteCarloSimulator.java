@@ -33,7 +33,7 @@ public final class MonteCarloSimulator {
         InputSampler sampler = new InputSampler(study);
         RealisationEvaluator baseEvaluator = new RealisationEvaluator(geometry);
         int[] reservoirUnits = baseEvaluator.reservoirUnits();
-        RealisationOutcome baseCase = baseEvaluator.evaluate(sampler.sample(ScriptedUniforms.medians()), null, -1);
+        RealisationOutcome baseCase = baseEvaluator.evaluate(sampler.sample(ScriptedUniforms.medians()), null);
         progress.worked(2);
 
         progress.subTask("Ranking inputs (tornado)");
@@ -63,7 +63,7 @@ public final class MonteCarloSimulator {
         for (int i = 0; i < count && !cancelled.getAsBoolean(); i++) {
             long index = first + (long) i;
             RealisationInputs inputs = sampler.sample(RealisationRandom.of(seed, index));
-            block.outcomes[i] = evaluator.evaluate(inputs, block.leakCells, index);
+            block.outcomes[i] = evaluator.evaluate(inputs, block.leakCells);
         }
         return block;
     }
@@ -76,9 +76,8 @@ public final class MonteCarloSimulator {
             bars.add(new ArrayList<>());
         }
         for (int d = 0; d < labels.size(); d++) {
-            RealisationOutcome low = evaluator.evaluate(sampler.sample(ScriptedUniforms.moving(d, TORNADO_LOW)), null, -1);
-            RealisationOutcome high = evaluator.evaluate(sampler.sample(ScriptedUniforms.moving(d, TORNADO_HIGH)), null,
-                    -1);
+            RealisationOutcome low = evaluator.evaluate(sampler.sample(ScriptedUniforms.moving(d, TORNADO_LOW)), null);
+            RealisationOutcome high = evaluator.evaluate(sampler.sample(ScriptedUniforms.moving(d, TORNADO_HIGH)), null);
             for (int s = 0; s < reservoirUnits.length; s++) {
                 TornadoBar bar = new TornadoBar(labels.get(d), low.get(s, UnitQuantity.CONTACT),
                         high.get(s, UnitQuantity.CONTACT));

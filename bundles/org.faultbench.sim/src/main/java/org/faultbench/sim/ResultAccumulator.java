@@ -13,13 +13,21 @@ final class ResultAccumulator {
     /** The results of consecutive realisations evaluated by one worker. */
     static final class Block {
         final RealisationOutcome[] outcomes;
-        final int[][] leakCells;
+        /**
+         * Per fault, realisations in which each cell leaks, indexed by {@link FaultPlaneFrame#cell}. A byte holds the
+         * count of a block, and keeps the counts a worker writes small enough to stay in its cache.
+         */
+        final byte[][] leakCells;
 
         Block(StudyGeometry geometry, int count) {
+            if (count > Byte.MAX_VALUE) {
+                throw new IllegalArgumentException("a block holds at most " + Byte.MAX_VALUE + " realisations, was "
+                        + count);
+            }
             outcomes = new RealisationOutcome[count];
-            leakCells = new int[geometry.faults.size()][];
+            leakCells = new byte[geometry.faults.size()][];
             for (FaultPlaneFrame frame : geometry.faults) {
-                leakCells[frame.index] = new int[frame.cells()];
+                leakCells[frame.index] = new byte[frame.cells()];
             }
         }
     }
@@ -27,6 +35,7 @@ final class ResultAccumulator {
     private final StudyGeometry geometry;
     private final List<Map<UnitQuantity, StreamingSummary>> statistics = new ArrayList<>();
     private final long[][] mechanismCounts;
+    /** Laid out like {@link Block#leakCells}; turned row by row in {@link #leakMaps()}. */
     private final long[][] leakCounts;
     private int realisations;
 
@@ -61,7 +70,7 @@ final class ResultAccumulator {
             }
         }
         for (int f = 0; f < leakCounts.length; f++) {
-            int[] cells = block.leakCells[f];
+            byte[] cells = block.leakCells[f];
             for (int c = 0; c < cells.length; c++) {
                 leakCounts[f][c] += cells[c];
             }
@@ -89,8 +98,11 @@ final class ResultAccumulator {
         for (FaultPlaneFrame frame : geometry.faults) {
             long[] counts = leakCounts[frame.index];
             double[] probability = new double[counts.length];
-            for (int c = 0; c < counts.length; c++) {
-                probability[c] = realisations == 0 ? 0 : counts[c] / (double) realisations;
+            for (int column = 0; column < frame.columns; column++) {
+                for (int row = 0; row < frame.rows; row++) {
+                    long count = counts[frame.cell(column, row)];
+                    probability[row * frame.columns + column] = realisations == 0 ? 0 : count / (double) realisations;
+                }
             }
             maps.add(new LeakProbabilityMap(frame.bounding.id(), frame.u.clone(), frame.zTop, frame.cellHeight,
                     frame.rows, probability));

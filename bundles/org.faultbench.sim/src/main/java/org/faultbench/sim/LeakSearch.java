@@ -1,0 +1,273 @@
+package org.faultbench.sim;
+
+import java.util.Arrays;
+
+import org.faultbench.core.column.ResolvedColumn;
+import org.faultbench.juxtaposition.ColumnIntervals;
+import org.faultbench.juxtaposition.HungColumns;
+
+/**
+ * Searches the bounding faults of one realisation for each reservoir unit's leak point: the shallowest free-water
+ * level z + P_th / (Δρ·g) that its reservoir/reservoir contacts on the compartment side support. On the way it finds
+ * each unit's shallowest connection across the attic fault and marks the fault-plane cells that leak before the trap
+ * fills to its spill point.
+ *
+ * <p>The search skips, without changing any result, what cannot matter: columns and contacts that start below their
+ * unit's depth of interest ({@link #depthOfInterest}), since a free-water level never lies above its point (threshold
+ * pressures are &ge; 0), cells count only above the spill depth and connections only move up; and the rest of a
+ * fault-rock window once a lower bound of its threshold pressure puts every free-water level deeper than that. It
+ * also asks for exact threshold pressures only where their bounds leave a comparison open. The leak search of the
+ * first implementation, which evaluated every point, is kept in LeakSearchTest as the reference it must match bit for
+ * bit.
+ *
+ * <p>Not thread-safe: one per worker; it keeps the state of the realisation it searches.
+ */
+final class LeakSearch {
+    /** Step below a window top for its first sample, so boundary round-off does not put the point in the unit above. */
+    private static final double INSIDE = 1e-6;
+
+    private final StudyGeometry geometry;
+    private final int[] slotOfUnit;
+    private final int atticFault;
+    private final boolean juxtapositionOnly;
+    private final ColumnIntervals intervals = new ColumnIntervals();
+    /** Null when juxtaposition alone decides. */
+    private final PointThreshold threshold;
+    /** Per unit slot, the depths of the unit's top and base below the reference horizon in the realisation's column. */
+    private final double[] topBelowReference;
+    private final double[] baseBelowReference;
+    /** Per unit slot, where the leak point is so far: fault (-1 = none), column and depth, kept as numbers. */
+    private final int[] locationFault;
+    private final int[] locationColumn;
+    private final double[] locationDepth;
+    /** Per unit slot, the depth of interest of its contacts ({@link #depthOfInterest}), kept up to date. */
+    private final double[] interest;
+
+    // the realisation being searched
+    private RealisationInputs in;
+    private HungColumns hung;
+    private double buoyancyPerMetre;
+    private double thresholdFactor;
+    private double[] spill;
+    private double[] leak;
+    private double[] connection;
+    private byte[][] leakCells;
+    // the fault being scanned
+    private boolean attic;
+    /** The last row marked in the column being scanned; rows only grow down a column. */
+    private int lastMarkedRow;
+
+    LeakSearch(StudyGeometry geometry, int[] slotOfUnit, int atticFault) {
+        this.geometry = geometry;
+        this.slotOfUnit = slotOfUnit;
+        this.atticFault = atticFault;
+        this.juxtapositionOnly = geometry.study.seal().juxtapositionOnly();
+        this.threshold = juxtapositionOnly ? null : PointThreshold.of(geometry.study.seal());
+        int slots = (int) Arrays.stream(slotOfUnit).filter(s -> s >= 0).count();
+        topBelowReference = new double[slots];
+        baseBelowReference = new double[slots];
+        locationFault = new int[slots];
+        locationColumn = new int[slots];
+        locationDepth = new double[slots];
+        interest = new double[slots];
+    }
+
+    /**
+     * Searches all bounding faults.
+     *
+     * @param spill per unit slot, the spill depth of this realisation
+     * @param leak per unit slot, set to the leak depth (+infinity when no contact leaks)
+     * @param connection per unit slot, set to the shallowest reservoir/reservoir contact on the attic fault
+     * @param locations per unit slot, set to where the leak point is (left null when no contact leaks)
+     * @param leakCells per fault, counts of realisations in which each cell leaks (incremented here); may be null
+     */
+    void run(RealisationInputs in, double buoyancyPerMetre, double[] spill, double[] leak, double[] connection,
+            LeakLocation[] locations, byte[][] leakCells) {
+        ResolvedColumn column = in.column();
+        this.in = in;
+        this.hung = new HungColumns(column, column, geometry.referenceUnit);
+        for (int unit = 0; unit < slotOfUnit.length; unit++) {
+            if (slotOfUnit[unit] >= 0) {
+                // the values juxtaposeReservoirs adds to a cut-off for this unit (both walls hang this column)
+                topBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit);
+                baseBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit + 1);
+            }
+        }
+        if (threshold != null) {
+            threshold.useColumn(column);
+        }
+        this.buoyancyPerMetre = buoyancyPerMetre;
+        this.thresholdFactor = geometry.study.seal().thresholdScale() * Math.pow(10, -in.calibrationShift());
+        this.spill = spill;
+        this.leak = leak;
+        this.connection = connection;
+        this.leakCells = leakCells;
+        Arrays.fill(leak, Double.POSITIVE_INFINITY);
+        Arrays.fill(connection, Double.POSITIVE_INFINITY);
+        Arrays.fill(locationFault, -1);
+        for (FaultPlaneFrame frame : geometry.faults) {
+            scanFault(frame);
+        }
+        for (int s = 0; s < leak.length; s++) {
+            if (locationFault[s] >= 0) {
+                FaultPlaneFrame frame = geometry.faults.get(locationFault[s]);
+                locations[s] = new LeakLocation(frame.bounding.id(), frame.u[locationColumn[s]], locationDepth[s]);
+            }
+        }
+    }
+
+    private void scanFault(FaultPlaneFrame frame) {
+        byte[] cells = leakCells == null ? null : leakCells[frame.index];
+        double scale = in.throwScale()[frame.index];
+        boolean onFootwall = frame.compartmentOnFootwall();
+        attic = frame.index == atticFault;
+        for (int s = 0; s < interest.length; s++) {
+            interest[s] = depthOfInterest(s);
+        }
+        double refTop = in.column().top(geometry.referenceUnit);
+        for (int k = 0; k < frame.columns; k++) {
+            if (!frame.hasData[k]) {
+                continue;
+            }
+            double zFw = frame.footwall[k] + in.depthError(frame.x[k], frame.y[k]);
+            double throwK = scale * (frame.hangingWall[k] - frame.footwall[k]);
+            double zHw = zFw + throwK;
+            double deepest = deepestOfInterest(onFootwall ? zFw : zHw);
+            if (deepest == Double.NEGATIVE_INFINITY) {
+                continue; // no contact in this column can change a result
+            }
+            hung.juxtaposeReservoirs(zFw, zHw, deepest, intervals);
+            lastMarkedRow = -1;
+            for (int n = 0; n < intervals.count(); n++) {
+                int s = slotOfUnit[onFootwall ? intervals.footwallUnit(n) : intervals.hangingWallUnit(n)];
+                double top = intervals.top(n);
+                if (!(top < interest[s])) {
+                    continue;
+                }
+                if (attic) {
+                    connection[s] = Math.min(connection[s], top);
+                    interest[s] = depthOfInterest(s);
+                }
+                if (juxtapositionOnly) {
+                    juxtapositionWindow(frame, k, s, top, intervals.base(n), cells);
+                } else if (throwK >= 0) { // the criterion takes the footwall position s, s - T is in the hanging wall
+                    sampleWindow(frame, k, s, top, intervals.base(n), throwK, refTop - zFw,
+                            intervals.hangingWallUnit(n), intervals.footwallUnit(n), cells);
+                } else {
+                    sampleWindow(frame, k, s, top, intervals.base(n), -throwK, refTop - zHw,
+                            intervals.footwallUnit(n), intervals.hangingWallUnit(n), cells);
+                }
+            }
+        }
+    }
+
+    /**
+     * A contact of unit slot {@code s} starting at or below this depth changes nothing: not the leak depth (its
+     * free-water levels lie at or below its points), not the leak map (cells count only above the spill depth), not
+     * the connection on the attic fault (it only moves up).
+     */
+    private double depthOfInterest(int s) {
+        double depth = pointInterest(s);
+        return attic ? Math.max(depth, connection[s]) : depth;
+    }
+
+    /** The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above. */
+    private double pointInterest(int s) {
+        return leakCells != null ? Math.max(leak[s], spill[s]) : leak[s];
+    }
+
+    private void lowerLeak(int s, double level, FaultPlaneFrame frame, int column, double z) {
+        leak[s] = level;
+        locationFault[s] = frame.index;
+        locationColumn[s] = column;
+        locationDepth[s] = z;
+        interest[s] = depthOfInterest(s);
+    }
+
+    /**
+     * The depth from which on no contact of a fault-plane column matters; -infinity when none does. A contact of unit
+     * slot s lies inside that unit on the compartment wall, so it matters only if it starts above the unit's depth of
+     * interest, which must then lie below the unit's top there, and above the unit's base there.
+     *
+     * @param compartmentCutOff the reference horizon's cut-off on the compartment wall
+     */
+    private double deepestOfInterest(double compartmentCutOff) {
+        double deepest = Double.NEGATIVE_INFINITY;
+        for (int s = 0; s < interest.length; s++) {
+            if (compartmentCutOff + topBelowReference[s] < interest[s]) {
+                deepest = Math.max(deepest, Math.min(compartmentCutOff + baseBelowReference[s], interest[s]));
+            }
+        }
+        return deepest;
+    }
+
+    /** Juxtaposition only: the window top leaks, and so do the cells centred in the window above the spill depth. */
+    private void juxtapositionWindow(FaultPlaneFrame frame, int column, int s, double top, double base, byte[] cells) {
+        if (top < leak[s]) {
+            lowerLeak(s, top, frame, column, top);
+        }
+        if (cells == null) {
+            return;
+        }
+        double bottom = Math.min(base, spill[s]);
+        int row = Math.max(frame.firstRowCentredAtOrBelow(top), lastMarkedRow + 1); // count each cell once
+        for (; row < frame.rows && frame.rowCentre(row) < bottom; row++) {
+            cells[frame.cell(column, row)]++;
+            lastMarkedRow = row;
+        }
+    }
+
+    /**
+     * Fault rock: samples the window at its top and then at every cell centre, down to its base or as long as a point
+     * is of interest. The exact threshold pressure is worked out only where its bounds leave open whether the point
+     * lowers the leak depth or leaks before spill.
+     *
+     * @param faultThrow throw, &ge; 0
+     * @param positionShift stratigraphic position minus depth of the wall whose position the criterion is given
+     * @param topUnit unit at position - throw
+     * @param baseUnit unit at the position
+     */
+    private void sampleWindow(FaultPlaneFrame frame, int column, int s, double top, double base, double faultThrow,
+            double positionShift, int topUnit, int baseUnit, byte[] cells) {
+        double first = top + INSIDE;
+        double lowest = threshold.lowerBoundAlong(faultThrow, first + positionShift, base + positionShift, topUnit,
+                baseUnit);
+        // no point at or below z in this window supports a free-water level shallower than z + rise
+        double rise = lowest * thresholdFactor / buoyancyPerMetre;
+        for (double z = first; z < base && z + rise < pointInterest(s); z = nextSample(frame, z)) {
+            threshold.moveTo(z, faultThrow, z + positionShift);
+            double shallowest = freeWaterLevel(z, threshold.lowerBound());
+            if (shallowest < leak[s]) {
+                double level = freeWaterLevel(z, threshold.exact());
+                if (level < leak[s]) {
+                    lowerLeak(s, level, frame, column, z);
+                }
+            }
+            if (cells != null && z > top + INSIDE && shallowest < spill[s]
+                    && (freeWaterLevel(z, threshold.upperBound()) < spill[s]
+                            || freeWaterLevel(z, threshold.exact()) < spill[s])) {
+                mark(frame, column, frame.row(z), cells);
+            }
+        }
+    }
+
+    /** The free-water level a threshold pressure supports at depth z; never falls as the pressure rises. */
+    private double freeWaterLevel(double z, double thresholdPressure) {
+        return z + thresholdPressure * thresholdFactor / buoyancyPerMetre;
+    }
+
+    /** The next sample depth: the centre of the next leak-probability cell below z (cells continue past the frame). */
+    private static double nextSample(FaultPlaneFrame frame, double z) {
+        double centre = frame.zTop + (Math.floor((z - frame.zTop) / frame.cellHeight) + 0.5) * frame.cellHeight;
+        return centre > z ? centre : centre + frame.cellHeight;
+    }
+
+    /** Counts a cell once per realisation: a column is scanned once, top down, so a repeat can only be its last row. */
+    private void mark(FaultPlaneFrame frame, int column, int row, byte[] cells) {
+        if (row < 0 || row >= frame.rows || row == lastMarkedRow) {
+            return;
+        }
+        lastMarkedRow = row;
+        cells[frame.cell(column, row)]++;
+    }
+}
