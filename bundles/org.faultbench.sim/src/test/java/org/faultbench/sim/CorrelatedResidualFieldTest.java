@@ -39,22 +39,8 @@ class CorrelatedResidualFieldTest {
 
     @Test
     void drawCountIsFixedByTheExtent() {
-        CountingRandom rng = new CountingRandom();
+        CountingUniforms rng = new CountingUniforms();
         CorrelatedResidualField.sample(0, 3000, 0, 2000, L, SD, rng);
         assertEquals(CorrelatedResidualField.drawCount(0, 3000, 0, 2000, L), rng.draws);
-    }
-
-    private static final class CountingRandom extends org.apache.commons.math3.random.AbstractRandomGenerator {
-        int draws;
-
-        @Override
-        public void setSeed(long seed) {
-        }
-
-        @Override
-        public double nextDouble() {
-            draws++;
-            return 0.5;
-        }
     }
 }

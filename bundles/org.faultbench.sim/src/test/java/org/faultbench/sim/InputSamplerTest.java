@@ -4,27 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.Optional;
 
-import org.apache.commons.math3.random.AbstractRandomGenerator;
 import org.faultbench.core.uncertain.UncertainValue;
 import org.faultbench.seal.ShaleGougeRatioCriterion;
 import org.junit.jupiter.api.Test;
 
 class InputSamplerTest {
-
-    /** Counts draws; returns the median so every input is valid. */
-    private static final class CountingUniforms extends AbstractRandomGenerator {
-        int draws;
-
-        @Override
-        public void setSeed(long seed) {
-        }
-
-        @Override
-        public double nextDouble() {
-            draws++;
-            return 0.5;
-        }
-    }
 
     @Test
     void everyLabelledInputTakesExactlyOneDraw() {
