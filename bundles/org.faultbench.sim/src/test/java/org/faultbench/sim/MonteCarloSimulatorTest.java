@@ -114,13 +114,13 @@ class MonteCarloSimulatorTest {
     }
 
     @Test
-    void sameSeedGivesBitIdenticalResultsOnOneTwoAndFourThreads() {
+    void sameSeedGivesBitIdenticalResultsOnOneTwoFourAndEightThreads() {
         TrapStudy study = SingleFaultDome.study(20, new ShaleGougeRatioCriterion(), UncertainValue.normal(1, 0.15),
                 Optional.of(new AtticSetup("F1", UncertainValue.uniform(1050, 1070))),
                 SingleFaultDome.column(UncertainValue.normal(30, 4)), new DepthUncertainty(UncertainValue.normal(0, 5), 3, 800),
                 UncertainValue.normal(750, 20), UncertainValue.fixed(1050));
         SimulationResult one = run(study, 96, 1);
-        for (int threads : new int[] { 2, 4 }) {
+        for (int threads : new int[] { 2, 4, 8 }) {
             SimulationResult many = run(study, 96, threads);
             for (int s = 0; s < one.units().size(); s++) {
                 for (UnitQuantity q : UnitQuantity.values()) {
