@@ -1,5 +1,6 @@
 package org.faultbench.app;
 
+import org.faultbench.study.ResultsWriter;
 import org.osgi.framework.Bundle;
 import org.osgi.framework.FrameworkUtil;
 import org.osgi.framework.Version;
@@ -8,13 +9,8 @@ import org.osgi.framework.Version;
 public final class ProductInfo {
     public static final String PRODUCT_NAME = "Faultbench";
 
-    /** The cautions, one per line; the same wording appears in reports and the About dialog. */
-    public static final String CAUTIONS = String.join("\n",
-            "Decision support only: results are model estimates, not a decision.",
-            "Every input carries uncertainty; read ranges (P90/P50/P10, exceedance convention), not single numbers.",
-            "Seal calibrations are basin-specific: calibrate against field pressures and contacts.",
-            "Clay-based seal rules do not apply to carbonates, evaporites or crystalline rocks.",
-            "Well, reserves and storage decisions rest with licensed professionals under local regulations.");
+    /** The cautions, one per line: the same list the result files and the batch run carry. */
+    public static final String CAUTIONS = String.join("\n", ResultsWriter.CAUTIONS);
 
     private ProductInfo() {
     }

@@ -25,7 +25,7 @@ final class ResultTable {
     void print(SimulationResult result) {
         out.printf(Locale.ROOT, "%n%s: %d realisations, seed %d%s%n", result.studyName(), result.realisationsRun(),
                 result.settings().seed(), result.complete() ? "" : " (cancelled: partial result)");
-        out.println("P90 = low case (90 % exceedance), P10 = high case (10 % exceedance)");
+        out.println(ExceedanceLevel.CONVENTION);
         out.printf(Locale.ROOT, "%-12s %-34s %12s %12s %12s  %s%n", "unit", "quantity", "P90 (low)", "P50",
                 "P10 (high)", "controlled by");
         for (UnitSummary unit : result.units()) {

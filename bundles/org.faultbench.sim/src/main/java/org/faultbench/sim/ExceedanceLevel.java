@@ -11,6 +11,9 @@ public enum ExceedanceLevel {
     P50(0.50, "P50 (median)"),
     P10(0.90, "P10 (high case, 10 % exceedance)");
 
+    /** One line stating the convention, for table headers and result summaries. */
+    public static final String CONVENTION = "P90 = low case (90 % exceedance), P10 = high case (10 % exceedance)";
+
     private final double cumulativeProbability;
     private final String label;
 

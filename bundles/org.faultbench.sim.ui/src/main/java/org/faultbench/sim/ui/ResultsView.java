@@ -17,6 +17,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.ui.part.ViewPart;
+import org.faultbench.sim.ExceedanceLevel;
 import org.faultbench.sim.SimulationResult;
 import org.faultbench.sim.SimulationSettings;
 import org.faultbench.sim.UnitQuantity;
@@ -34,7 +35,6 @@ import org.faultbench.ui.NumberText;
  */
 public class ResultsView extends ViewPart {
     public static final String ID = "org.faultbench.sim.ui.results";
-    static final String CONVENTION = "P90 = low case (90 % exceedance), P10 = high case (10 % exceedance)";
 
     private Label status;
     private Label mechanisms;
@@ -111,7 +111,7 @@ public class ResultsView extends ViewPart {
         SimulationResult result = active.result().orElse(null);
         if (result == null) {
             status.setText(active.analysis().map(a -> "Study '" + a.study().name() + "': press Run to simulate "
-                    + a.realisations() + " realisations. " + CONVENTION + ".")
+                    + a.realisations() + " realisations. " + ExceedanceLevel.CONVENTION + ".")
                     .orElse("No study is open. Per-unit spill, leak, contact and column appear here as P90/P50/P10 "
                             + "(exceedance convention) after a Monte Carlo run."));
             mechanisms.setText("");
@@ -120,7 +120,7 @@ public class ResultsView extends ViewPart {
         } else {
             status.setText(String.format(Locale.ROOT, "%s: %d realisations, seed %d%s. %s.", result.studyName(),
                     result.realisationsRun(), result.settings().seed(), result.complete() ? "" : " (cancelled: partial)",
-                    CONVENTION));
+                    ExceedanceLevel.CONVENTION));
             mechanisms.setText(mechanismText(result));
             table.setInput(ResultRow.of(result));
             String selected = tornadoUnit.getText();
