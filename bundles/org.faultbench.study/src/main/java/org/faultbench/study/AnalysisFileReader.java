@@ -69,15 +69,23 @@ public final class AnalysisFileReader {
     private static final double DEFAULT_CUT_OFF_OFFSET = 50;
 
     public AnalysisFile read(Path file) throws StudyFormatException {
-        String name = file.toString();
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
         } catch (NoSuchFileException e) {
-            throw new StudyFormatException(name, "", "file not found", e);
+            throw new StudyFormatException(file.toString(), "", "file not found", e);
         } catch (IOException e) {
-            throw new StudyFormatException(name, "", "cannot be read: " + e.getMessage(), e);
+            throw new StudyFormatException(file.toString(), "", "cannot be read: " + e.getMessage(), e);
         }
+        return read(file, bytes);
+    }
+
+    /**
+     * Reads an analysis held in memory as if it were the content of {@code file} (relative paths resolve against
+     * the file's folder): an edited, not yet saved study goes through the same checks as one read from disk.
+     */
+    public AnalysisFile read(Path file, byte[] bytes) throws StudyFormatException {
+        String name = file.toString();
         JsonElement root;
         try {
             root = JsonParser.parseString(new String(bytes, StandardCharsets.UTF_8));

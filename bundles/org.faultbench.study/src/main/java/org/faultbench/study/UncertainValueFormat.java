@@ -2,7 +2,17 @@ package org.faultbench.study;
 
 import java.util.List;
 
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonPrimitive;
+
+import org.faultbench.core.uncertain.Bounds;
+import org.faultbench.core.uncertain.FixedValue;
+import org.faultbench.core.uncertain.LogNormalValue;
+import org.faultbench.core.uncertain.NormalValue;
+import org.faultbench.core.uncertain.TriangularValue;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.core.uncertain.UniformValue;
 
 /**
  * Reads an uncertain input: a plain number (a fixed value) or an object with exactly one distribution key:
@@ -57,6 +67,54 @@ final class UncertainValueFormat {
             double sigma = p.field("sigmaLn").number();
             return wrap(p, () -> UncertainValue.logNormal(median, sigma));
         }
+    }
+
+    /**
+     * The JSON form {@link #read} reads back to the same value. A truncation that only repeats {@code bounds} (the
+     * limits the model adds itself, e.g. thickness &ge; 0) is left out.
+     */
+    static JsonElement write(UncertainValue value, Bounds bounds) {
+        if (value instanceof FixedValue f) {
+            return new JsonPrimitive(f.value());
+        }
+        JsonObject p = new JsonObject();
+        String kind;
+        if (value instanceof NormalValue n) {
+            p.addProperty("mean", n.mean());
+            p.addProperty("sd", n.standardDeviation());
+            boolean explicit = limit(n.lower(), bounds.min()) || limit(n.upper(), bounds.max());
+            if (explicit) {
+                p.addProperty("min", n.lower());
+                p.addProperty("max", n.upper());
+            }
+            kind = explicit ? "truncatedNormal" : "normal";
+        } else if (value instanceof TriangularValue t) {
+            p.addProperty("min", t.min());
+            p.addProperty("mode", t.mode());
+            p.addProperty("max", t.max());
+            kind = "triangular";
+        } else if (value instanceof UniformValue u) {
+            p.addProperty("min", u.min());
+            p.addProperty("max", u.max());
+            kind = "uniform";
+        } else {
+            LogNormalValue l = (LogNormalValue) value;
+            if (limit(l.lower(), bounds.min()) || limit(l.upper(), bounds.max())) {
+                throw new IllegalArgumentException("the analysis file format has no truncated lognormal; "
+                        + "truncate at the field's own limits " + bounds + " only");
+            }
+            p.addProperty("median", l.median());
+            p.addProperty("sigmaLn", l.sigmaLn());
+            kind = "lognormal";
+        }
+        JsonObject o = new JsonObject();
+        o.add(kind, p);
+        return o;
+    }
+
+    /** True when a truncation limit is one the user set, not open and not the field's own bound. */
+    private static boolean limit(double limit, double bound) {
+        return Double.isFinite(limit) && limit != bound;
     }
 
     /** Builds a value, turning the model's own validation message into an error at this field. */

@@ -1,0 +1,68 @@
+package org.faultbench.study;
+
+import java.nio.charset.StandardCharsets;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonPrimitive;
+
+import org.faultbench.core.LithologyClass;
+import org.faultbench.core.uncertain.UncertainValue;
+
+/**
+ * Edits of an open study. Each edit changes the analysis file's JSON (so saving writes exactly what the user sees,
+ * with every other field left as it was) and reads the result back through {@link AnalysisFileReader}, so an edit
+ * that the file format or the model would reject is rejected here, before it reaches the active study.
+ */
+public final class StudyEdits {
+
+    private StudyEdits() {
+    }
+
+    /** The study with one property of the unit at {@code unitIndex} (shallowest first) set to {@code value}. */
+    public static AnalysisFile withUnitProperty(AnalysisFile analysis, int unitIndex, UnitProperty property,
+            UncertainValue value) throws StudyFormatException {
+        JsonElement json;
+        try {
+            json = UncertainValueFormat.write(value, property.bounds());
+        } catch (IllegalArgumentException e) {
+            throw new StudyFormatException(analysis.file().toString(), unitField(unitIndex, property.key()),
+                    e.getMessage(), e);
+        }
+        return withUnitField(analysis, unitIndex, property.key(), json);
+    }
+
+    /** The study with the lithology of the unit at {@code unitIndex} changed. */
+    public static AnalysisFile withUnitLithology(AnalysisFile analysis, int unitIndex, LithologyClass lithology)
+            throws StudyFormatException {
+        return withUnitField(analysis, unitIndex, "lithology",
+                new JsonPrimitive(lithology.name().toLowerCase(java.util.Locale.ROOT)));
+    }
+
+    /** The analysis file's text as it would be saved: the edited JSON, pretty-printed. */
+    public static byte[] content(AnalysisFile analysis) {
+        String text = new GsonBuilder().setPrettyPrinting().serializeSpecialFloatingPointValues().create()
+                .toJson(analysis.document());
+        return (text + "\n").getBytes(StandardCharsets.UTF_8);
+    }
+
+    private static AnalysisFile withUnitField(AnalysisFile analysis, int unitIndex, String key, JsonElement value)
+            throws StudyFormatException {
+        JsonObject document = analysis.document().deepCopy();
+        JsonObject unit = document.getAsJsonObject("stratigraphy").getAsJsonArray("units").get(unitIndex)
+                .getAsJsonObject();
+        unit.add(key, value);
+        return reread(analysis, document);
+    }
+
+    private static AnalysisFile reread(AnalysisFile analysis, JsonObject document) throws StudyFormatException {
+        AnalysisFile edited = new AnalysisFile(analysis.file(), analysis.sha256(), analysis.formatVersion(),
+                analysis.study(), analysis.realisations(), analysis.seed(), analysis.cellHeight(), document);
+        return new AnalysisFileReader().read(analysis.file(), content(edited));
+    }
+
+    private static String unitField(int unitIndex, String key) {
+        return "stratigraphy.units[" + unitIndex + "]." + key;
+    }
+}
