@@ -11,9 +11,12 @@ import org.eclipse.ui.actions.ContributionItemFactory;
 import org.eclipse.ui.application.ActionBarAdvisor;
 import org.eclipse.ui.application.IActionBarConfigurer;
 
-/** Main menu: File, Window (perspectives, views, preferences) and Help (About). */
+/** Main menu: File (save), Edit (undo, redo), Window (perspectives, views, preferences) and Help (About). */
 class FaultbenchActionBarAdvisor extends ActionBarAdvisor {
     private IWorkbenchAction quit;
+    private IWorkbenchAction save;
+    private IWorkbenchAction undo;
+    private IWorkbenchAction redo;
     private IWorkbenchAction preferences;
     private IWorkbenchAction resetPerspective;
     private IWorkbenchAction savePerspective;
@@ -27,6 +30,9 @@ class FaultbenchActionBarAdvisor extends ActionBarAdvisor {
     protected void makeActions(IWorkbenchWindow window) {
         this.window = window;
         quit = register(ActionFactory.QUIT.create(window));
+        save = register(ActionFactory.SAVE.create(window));
+        undo = register(ActionFactory.UNDO.create(window));
+        redo = register(ActionFactory.REDO.create(window));
         preferences = register(ActionFactory.PREFERENCES.create(window));
         resetPerspective = register(ActionFactory.RESET_PERSPECTIVE.create(window));
         savePerspective = register(ActionFactory.SAVE_PERSPECTIVE.create(window));
@@ -41,8 +47,14 @@ class FaultbenchActionBarAdvisor extends ActionBarAdvisor {
     protected void fillMenuBar(IMenuManager menuBar) {
         MenuManager file = new MenuManager("&File", IWorkbenchActionConstants.M_FILE);
         file.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
+        file.add(save);
         file.add(new Separator());
         file.add(quit);
+
+        MenuManager edit = new MenuManager("&Edit", IWorkbenchActionConstants.M_EDIT);
+        edit.add(undo);
+        edit.add(redo);
+        edit.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
 
         MenuManager openPerspective = new MenuManager("Open &Perspective");
         openPerspective.add(ContributionItemFactory.PERSPECTIVES_SHORTLIST.create(window));
@@ -62,6 +74,7 @@ class FaultbenchActionBarAdvisor extends ActionBarAdvisor {
         help.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
 
         menuBar.add(file);
+        menuBar.add(edit);
         menuBar.add(windowMenu);
         menuBar.add(new Separator(IWorkbenchActionConstants.MB_ADDITIONS));
         menuBar.add(help);

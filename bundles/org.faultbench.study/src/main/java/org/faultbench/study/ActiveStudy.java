@@ -23,6 +23,7 @@ public final class ActiveStudy {
     private final List<Listener> listeners = new CopyOnWriteArrayList<>();
     private volatile AnalysisFile analysis;
     private volatile SimulationResult result;
+    private volatile boolean dirty;
 
     public static ActiveStudy get() {
         return INSTANCE;
@@ -40,7 +41,32 @@ public final class ActiveStudy {
     public void open(AnalysisFile newAnalysis) {
         analysis = newAnalysis;
         result = null;
+        dirty = false;
         fire();
+    }
+
+    /**
+     * Replaces the study by an edited version of it (or, on undo, by an earlier one). The result of the old inputs
+     * no longer describes the study, so it is dropped; the study is marked as having unsaved changes.
+     */
+    public void edit(AnalysisFile edited) {
+        analysis = edited;
+        result = null;
+        dirty = true;
+        fire();
+    }
+
+    /** Records that {@code saved} was written to its file; clears the unsaved-changes mark if it is still active. */
+    public void saved(AnalysisFile saved) {
+        if (saved == analysis) {
+            dirty = false;
+            fire();
+        }
+    }
+
+    /** True when the active study has edits not yet written to its file. */
+    public boolean isDirty() {
+        return dirty;
     }
 
     /** Records a result, if it belongs to the study that is still active. */

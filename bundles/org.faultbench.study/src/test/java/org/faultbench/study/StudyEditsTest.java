@@ -65,4 +65,16 @@ class StudyEditsTest {
                 0, UnitProperty.THICKNESS, new org.faultbench.core.uncertain.LogNormalValue(50, 0.2, 30, 80)));
         assertTrue(e.getMessage().contains("stratigraphy.units[0].thickness"), e.getMessage());
     }
+
+    @Test
+    void savingWritesTheEditAndKeepsThePreviousVersion() throws Exception {
+        AnalysisFile original = dome();
+        byte[] before = Files.readAllBytes(original.file());
+        AnalysisFile edited = StudyEdits.withUnitProperty(original, 0, UnitProperty.VCL, UncertainValue.fixed(0.66));
+        AnalysisFile saved = new AnalysisFileSaver().save(edited);
+        assertEquals(UncertainValue.fixed(0.66), saved.study().stratigraphy().units().get(0).clayFraction());
+        assertEquals(new String(before), Files.readString(original.file().resolveSibling(
+                original.file().getFileName() + ".bak")), "the previous version is kept as .bak");
+        assertEquals(saved.sha256(), AnalysisFileReader.sha256(Files.readAllBytes(original.file())));
+    }
 }

@@ -7,10 +7,11 @@ import org.eclipse.ui.IViewPart;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.PlatformUI;
 import org.faultbench.digitize.ui.MapSheetView;
-import org.faultbench.faults.ui.FaultInspectorView;
+import org.faultbench.faults.ui.DisplacementLengthView;
+import org.faultbench.faults.ui.ThrowProfileView;
 import org.faultbench.juxtaposition.ui.AllanDiagramView;
 import org.faultbench.sim.ui.ResultsView;
-import org.faultbench.strat.ui.UnitStackView;
+import org.faultbench.strat.ui.StratigraphyEditorView;
 import org.junit.jupiter.api.Test;
 
 /** Each UI bundle's view opens in the workbench and shows its content. */
@@ -30,15 +31,14 @@ class ViewsTest {
     }
 
     @Test
-    void faultInspector() throws Exception {
-        FaultInspectorView view = assertInstanceOf(FaultInspectorView.class, show(FaultInspectorView.ID));
-        assertTrue(view.summaryText().contains("throw profiles"), view.summaryText());
+    void faultViews() throws Exception {
+        assertInstanceOf(ThrowProfileView.class, show(ThrowProfileView.ID));
+        assertInstanceOf(DisplacementLengthView.class, show(DisplacementLengthView.ID));
     }
 
     @Test
-    void unitStack() throws Exception {
-        UnitStackView view = assertInstanceOf(UnitStackView.class, show(UnitStackView.ID));
-        assertTrue(view.summaryText().contains("clay fraction"), view.summaryText());
+    void stratigraphy() throws Exception {
+        assertInstanceOf(StratigraphyEditorView.class, show(StratigraphyEditorView.ID));
     }
 
     @Test
