@@ -44,8 +44,8 @@ final class RealisationEvaluator {
         return reservoirUnits.clone();
     }
 
-    /** @param leakCells per fault, counts of realisations in which each cell leaks (incremented here); may be null */
-    RealisationOutcome evaluate(RealisationInputs in, byte[][] leakCells) {
+    /** @param leakRuns where the runs of cells that leak in this realisation are added; may be null */
+    RealisationOutcome evaluate(RealisationInputs in, LeakRuns leakRuns) {
         ResolvedColumn column = in.column();
         int ref = geometry.referenceUnit;
         double contrast = in.densityContrast();
@@ -67,7 +67,7 @@ final class RealisationEvaluator {
             out.set(s, UnitQuantity.SPILL_DEPTH, spill[s]);
         }
 
-        leakSearch.run(in, buoyancyPerMetre, spill, leak, connection, out.leakLocation, leakCells);
+        leakSearch.run(in, buoyancyPerMetre, spill, leak, connection, out.leakLocation, leakRuns);
 
         for (int s = 0; s < reservoirUnits.length; s++) {
             int unit = reservoirUnits[s];
