@@ -45,7 +45,11 @@ final class LeakSearch {
 
     // the realisation being searched
     private RealisationInputs in;
+    /** Whether unit thicknesses vary along the faults (isochores): then each fault-plane column has its own column. */
+    private boolean columnPerPosition;
     private HungColumns hung;
+    /** Depth of the reference unit's top below the column top in the column in use. */
+    private double refTop;
     private double buoyancyPerMetre;
     private double thresholdFactor;
     private double[] spill;
@@ -85,19 +89,9 @@ final class LeakSearch {
      */
     void run(RealisationInputs in, double buoyancyPerMetre, double[] spill, double[] leak, double[] connection,
             LeakLocation[] locations, LeakRuns leakRuns) {
-        ResolvedColumn column = in.column();
         this.in = in;
-        this.hung = new HungColumns(column, column, geometry.referenceUnit);
-        for (int unit = 0; unit < slotOfUnit.length; unit++) {
-            if (slotOfUnit[unit] >= 0) {
-                // the values juxtaposeReservoirs adds to a cut-off for this unit (both walls hang this column)
-                topBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit);
-                baseBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit + 1);
-            }
-        }
-        if (threshold != null) {
-            threshold.useColumn(column);
-        }
+        this.columnPerPosition = in.columns() != null && in.columns().variesWithPosition();
+        useColumn(in.column());
         this.buoyancyPerMetre = buoyancyPerMetre;
         this.thresholdFactor = geometry.study.seal().thresholdScale() * Math.pow(10, -in.calibrationShift());
         this.spill = spill;
@@ -118,6 +112,22 @@ final class LeakSearch {
         }
     }
 
+    /** Hangs both walls of the fault-plane columns to come on {@code column}. */
+    private void useColumn(ResolvedColumn column) {
+        this.hung = new HungColumns(column, column, geometry.referenceUnit);
+        for (int unit = 0; unit < slotOfUnit.length; unit++) {
+            if (slotOfUnit[unit] >= 0) {
+                // the values juxtaposeReservoirs adds to a cut-off for this unit (both walls hang this column)
+                topBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit);
+                baseBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit + 1);
+            }
+        }
+        if (threshold != null) {
+            threshold.useColumn(column);
+        }
+        refTop = column.top(geometry.referenceUnit);
+    }
+
     private void scanFault(FaultPlaneFrame frame) {
         double scale = in.throwScale()[frame.index];
         boolean onFootwall = frame.compartmentOnFootwall();
@@ -125,10 +135,12 @@ final class LeakSearch {
         for (int s = 0; s < interest.length; s++) {
             interest[s] = depthOfInterest(s);
         }
-        double refTop = in.column().top(geometry.referenceUnit);
         for (int k = 0; k < frame.columns; k++) {
             if (!frame.hasData[k]) {
                 continue;
+            }
+            if (columnPerPosition) { // both walls take the thicknesses at the fault-plane column's trace position
+                useColumn(in.columns().columnAt(frame.x[k], frame.y[k]));
             }
             double zFw = frame.footwall[k] + in.depthError(frame.x[k], frame.y[k]);
             double throwK = scale * (frame.hangingWall[k] - frame.footwall[k]);
