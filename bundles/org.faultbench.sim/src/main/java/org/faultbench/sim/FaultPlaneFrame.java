@@ -84,14 +84,6 @@ final class FaultPlaneFrame {
         return rows * columns;
     }
 
-    /**
-     * Index of a cell in the leak counts of a realisation block: column by column, so that the cells of one column,
-     * which the leak search marks one after the other, lie side by side in memory.
-     */
-    int cell(int column, int row) {
-        return column * rows + row;
-    }
-
     /** Row of the cell containing depth z, or -1 / rows outside the frame. */
     int row(double z) {
         double r = Math.floor((z - zTop) / cellHeight);

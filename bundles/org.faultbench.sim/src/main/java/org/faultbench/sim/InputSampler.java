@@ -5,9 +5,9 @@ import java.util.Collections;
 import java.util.List;
 
 import org.apache.commons.math3.random.RandomGenerator;
-import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.core.grid.GridGeometry;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.strat.ColumnDraw;
 import org.faultbench.strat.StratUnit;
 
 /**
@@ -73,7 +73,7 @@ public final class InputSampler {
         double spill = optional(study.userSpillDepth().orElse(null), rng);
         double topSeal = optional(study.topSealCapacity().orElse(null), rng);
         double drainage = optional(study.attic().map(AtticSetup::drainageDepth).orElse(null), rng);
-        ResolvedColumn column = study.stratigraphy().sample(rng);
+        ColumnDraw columns = study.stratigraphy().sampleDraw(rng);
         var properties = study.stratigraphy().sampleReservoirProperties(rng);
         CorrelatedResidualField residual = null;
         DepthUncertainty depth = study.depthUncertainty();
@@ -82,7 +82,7 @@ public final class InputSampler {
                     depth.correlationLength(), depth.residualStandardDeviation(), rng);
         }
         return new RealisationInputs(shift, throwScale, brine, hydrocarbon, calibration, spill, topSeal, drainage,
-                column, properties, residual);
+                columns.representative(), properties, residual, columns);
     }
 
     private static double optional(UncertainValue value, RandomGenerator rng) {

@@ -45,17 +45,23 @@ final class LeakSearch {
 
     // the realisation being searched
     private RealisationInputs in;
+    /** Whether unit thicknesses vary along the faults (isochores): then each fault-plane column has its own column. */
+    private boolean columnPerPosition;
     private HungColumns hung;
+    /** Depth of the reference unit's top below the column top in the column in use. */
+    private double refTop;
     private double buoyancyPerMetre;
     private double thresholdFactor;
     private double[] spill;
     private double[] leak;
     private double[] connection;
-    private byte[][] leakCells;
-    // the fault being scanned
+    private LeakRuns leakRuns;
+    // the fault and column being scanned
     private boolean attic;
     /** The last row marked in the column being scanned; rows only grow down a column. */
     private int lastMarkedRow;
+    /** The run of marked rows not yet handed to {@link #leakRuns}: rows runFirst .. lastMarkedRow; -1 when none. */
+    private int runFirst;
 
     LeakSearch(StudyGeometry geometry, int[] slotOfUnit, int atticFault) {
         this.geometry = geometry;
@@ -79,29 +85,19 @@ final class LeakSearch {
      * @param leak per unit slot, set to the leak depth (+infinity when no contact leaks)
      * @param connection per unit slot, set to the shallowest reservoir/reservoir contact on the attic fault
      * @param locations per unit slot, set to where the leak point is (left null when no contact leaks)
-     * @param leakCells per fault, counts of realisations in which each cell leaks (incremented here); may be null
+     * @param leakRuns where the runs of cells that leak before the trap fills to spill are added; may be null
      */
     void run(RealisationInputs in, double buoyancyPerMetre, double[] spill, double[] leak, double[] connection,
-            LeakLocation[] locations, byte[][] leakCells) {
-        ResolvedColumn column = in.column();
+            LeakLocation[] locations, LeakRuns leakRuns) {
         this.in = in;
-        this.hung = new HungColumns(column, column, geometry.referenceUnit);
-        for (int unit = 0; unit < slotOfUnit.length; unit++) {
-            if (slotOfUnit[unit] >= 0) {
-                // the values juxtaposeReservoirs adds to a cut-off for this unit (both walls hang this column)
-                topBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit);
-                baseBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit + 1);
-            }
-        }
-        if (threshold != null) {
-            threshold.useColumn(column);
-        }
+        this.columnPerPosition = in.columns() != null && in.columns().variesWithPosition();
+        useColumn(in.column());
         this.buoyancyPerMetre = buoyancyPerMetre;
         this.thresholdFactor = geometry.study.seal().thresholdScale() * Math.pow(10, -in.calibrationShift());
         this.spill = spill;
         this.leak = leak;
         this.connection = connection;
-        this.leakCells = leakCells;
+        this.leakRuns = leakRuns;
         Arrays.fill(leak, Double.POSITIVE_INFINITY);
         Arrays.fill(connection, Double.POSITIVE_INFINITY);
         Arrays.fill(locationFault, -1);
@@ -116,18 +112,35 @@ final class LeakSearch {
         }
     }
 
+    /** Hangs both walls of the fault-plane columns to come on {@code column}. */
+    private void useColumn(ResolvedColumn column) {
+        this.hung = new HungColumns(column, column, geometry.referenceUnit);
+        for (int unit = 0; unit < slotOfUnit.length; unit++) {
+            if (slotOfUnit[unit] >= 0) {
+                // the values juxtaposeReservoirs adds to a cut-off for this unit (both walls hang this column)
+                topBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit);
+                baseBelowReference[slotOfUnit[unit]] = hung.footwall().topBelowReference(unit + 1);
+            }
+        }
+        if (threshold != null) {
+            threshold.useColumn(column);
+        }
+        refTop = column.top(geometry.referenceUnit);
+    }
+
     private void scanFault(FaultPlaneFrame frame) {
-        byte[] cells = leakCells == null ? null : leakCells[frame.index];
         double scale = in.throwScale()[frame.index];
         boolean onFootwall = frame.compartmentOnFootwall();
         attic = frame.index == atticFault;
         for (int s = 0; s < interest.length; s++) {
             interest[s] = depthOfInterest(s);
         }
-        double refTop = in.column().top(geometry.referenceUnit);
         for (int k = 0; k < frame.columns; k++) {
             if (!frame.hasData[k]) {
                 continue;
+            }
+            if (columnPerPosition) { // both walls take the thicknesses at the fault-plane column's trace position
+                useColumn(in.columns().columnAt(frame.x[k], frame.y[k]));
             }
             double zFw = frame.footwall[k] + in.depthError(frame.x[k], frame.y[k]);
             double throwK = scale * (frame.hangingWall[k] - frame.footwall[k]);
@@ -138,6 +151,7 @@ final class LeakSearch {
             }
             hung.juxtaposeReservoirs(zFw, zHw, deepest, intervals);
             lastMarkedRow = -1;
+            runFirst = -1;
             for (int n = 0; n < intervals.count(); n++) {
                 int s = slotOfUnit[onFootwall ? intervals.footwallUnit(n) : intervals.hangingWallUnit(n)];
                 double top = intervals.top(n);
@@ -149,14 +163,17 @@ final class LeakSearch {
                     interest[s] = depthOfInterest(s);
                 }
                 if (juxtapositionOnly) {
-                    juxtapositionWindow(frame, k, s, top, intervals.base(n), cells);
+                    juxtapositionWindow(frame, k, s, top, intervals.base(n));
                 } else if (throwK >= 0) { // the criterion takes the footwall position s, s - T is in the hanging wall
                     sampleWindow(frame, k, s, top, intervals.base(n), throwK, refTop - zFw,
-                            intervals.hangingWallUnit(n), intervals.footwallUnit(n), cells);
+                            intervals.hangingWallUnit(n), intervals.footwallUnit(n));
                 } else {
                     sampleWindow(frame, k, s, top, intervals.base(n), -throwK, refTop - zHw,
-                            intervals.footwallUnit(n), intervals.hangingWallUnit(n), cells);
+                            intervals.footwallUnit(n), intervals.hangingWallUnit(n));
                 }
+            }
+            if (leakRuns != null) {
+                flushRun(frame, k);
             }
         }
     }
@@ -173,7 +190,7 @@ final class LeakSearch {
 
     /** The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above. */
     private double pointInterest(int s) {
-        return leakCells != null ? Math.max(leak[s], spill[s]) : leak[s];
+        return leakRuns != null ? Math.max(leak[s], spill[s]) : leak[s];
     }
 
     private void lowerLeak(int s, double level, FaultPlaneFrame frame, int column, double z) {
@@ -201,19 +218,22 @@ final class LeakSearch {
         return deepest;
     }
 
-    /** Juxtaposition only: the window top leaks, and so do the cells centred in the window above the spill depth. */
-    private void juxtapositionWindow(FaultPlaneFrame frame, int column, int s, double top, double base, byte[] cells) {
+    /**
+     * Juxtaposition only: the window top leaks, and so do the cells centred in the window above the spill depth, a run
+     * of rows from the first centred at or below the top to the last centred above the bottom.
+     */
+    private void juxtapositionWindow(FaultPlaneFrame frame, int column, int s, double top, double base) {
         if (top < leak[s]) {
             lowerLeak(s, top, frame, column, top);
         }
-        if (cells == null) {
+        if (leakRuns == null) {
             return;
         }
         double bottom = Math.min(base, spill[s]);
-        int row = Math.max(frame.firstRowCentredAtOrBelow(top), lastMarkedRow + 1); // count each cell once
-        for (; row < frame.rows && frame.rowCentre(row) < bottom; row++) {
-            cells[frame.cell(column, row)]++;
-            lastMarkedRow = row;
+        int first = Math.max(frame.firstRowCentredAtOrBelow(top), lastMarkedRow + 1); // count each cell once
+        int end = frame.firstRowCentredAtOrBelow(bottom);
+        if (first < end) {
+            markRun(frame, column, first, end);
         }
     }
 
@@ -228,7 +248,7 @@ final class LeakSearch {
      * @param baseUnit unit at the position
      */
     private void sampleWindow(FaultPlaneFrame frame, int column, int s, double top, double base, double faultThrow,
-            double positionShift, int topUnit, int baseUnit, byte[] cells) {
+            double positionShift, int topUnit, int baseUnit) {
         double first = top + INSIDE;
         double lowest = threshold.lowerBoundAlong(faultThrow, first + positionShift, base + positionShift, topUnit,
                 baseUnit);
@@ -243,10 +263,10 @@ final class LeakSearch {
                     lowerLeak(s, level, frame, column, z);
                 }
             }
-            if (cells != null && z > top + INSIDE && shallowest < spill[s]
+            if (leakRuns != null && z > top + INSIDE && shallowest < spill[s]
                     && (freeWaterLevel(z, threshold.upperBound()) < spill[s]
                             || freeWaterLevel(z, threshold.exact()) < spill[s])) {
-                mark(frame, column, frame.row(z), cells);
+                mark(frame, column, frame.row(z));
             }
         }
     }
@@ -263,11 +283,27 @@ final class LeakSearch {
     }
 
     /** Counts a cell once per realisation: a column is scanned once, top down, so a repeat can only be its last row. */
-    private void mark(FaultPlaneFrame frame, int column, int row, byte[] cells) {
+    private void mark(FaultPlaneFrame frame, int column, int row) {
         if (row < 0 || row >= frame.rows || row == lastMarkedRow) {
             return;
         }
-        lastMarkedRow = row;
-        cells[frame.cell(column, row)]++;
+        markRun(frame, column, row, row + 1);
+    }
+
+    /** Marks rows first .. end - 1 (first past the last marked row), extending the pending run when they follow it. */
+    private void markRun(FaultPlaneFrame frame, int column, int first, int end) {
+        if (runFirst < 0 || first != lastMarkedRow + 1) {
+            flushRun(frame, column);
+            runFirst = first;
+        }
+        lastMarkedRow = end - 1;
+    }
+
+    /** Hands the pending run of the column to the leak runs. */
+    private void flushRun(FaultPlaneFrame frame, int column) {
+        if (runFirst >= 0) {
+            leakRuns.addRun(frame.index, column, runFirst, lastMarkedRow + 1);
+            runFirst = -1;
+        }
     }
 }

@@ -63,7 +63,7 @@ public final class MonteCarloSimulator {
         for (int i = 0; i < count && !cancelled.getAsBoolean(); i++) {
             long index = first + (long) i;
             RealisationInputs inputs = sampler.sample(RealisationRandom.of(seed, index));
-            block.outcomes[i] = evaluator.evaluate(inputs, block.leakCells);
+            block.outcomes[i] = evaluator.evaluate(inputs, block.leakRuns);
         }
         return block;
     }

@@ -4,6 +4,7 @@ import java.util.Arrays;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.core.grid.GridGeometry;
+import org.faultbench.core.grid.GridMask;
 import org.faultbench.core.grid.RegularGrid;
 import org.faultbench.core.units.PhysicalConstants;
 import org.faultbench.trap.Crest;
@@ -44,9 +45,11 @@ final class RealisationEvaluator {
         return reservoirUnits.clone();
     }
 
-    /** @param leakCells per fault, counts of realisations in which each cell leaks (incremented here); may be null */
-    RealisationOutcome evaluate(RealisationInputs in, byte[][] leakCells) {
-        ResolvedColumn column = in.column();
+    /** @param leakRuns where the runs of cells that leak in this realisation are added; may be null */
+    RealisationOutcome evaluate(RealisationInputs in, LeakRuns leakRuns) {
+        boolean isochores = in.columns() != null && in.columns().variesWithPosition();
+        // with isochores, the unit offsets of crest and spill are those at the crest (common practice: layer cake there)
+        ResolvedColumn column = isochores ? in.columns().columnAt(geometry.crest.x(), geometry.crest.y()) : in.column();
         int ref = geometry.referenceUnit;
         double contrast = in.densityContrast();
         if (!(contrast > 0)) {
@@ -67,7 +70,7 @@ final class RealisationEvaluator {
             out.set(s, UnitQuantity.SPILL_DEPTH, spill[s]);
         }
 
-        leakSearch.run(in, buoyancyPerMetre, spill, leak, connection, out.leakLocation, leakCells);
+        leakSearch.run(in, buoyancyPerMetre, spill, leak, connection, out.leakLocation, leakRuns);
 
         for (int s = 0; s < reservoirUnits.length; s++) {
             int unit = reservoirUnits[s];
@@ -84,16 +87,18 @@ final class RealisationEvaluator {
             double thickness = column.unit(unit).thickness();
             var properties = in.reservoirProperties().get(unit);
             if (Double.isFinite(contact)) {
-                out.set(s, UnitQuantity.STOIIP,
-                        properties.stockTankOil(trap.areaDepth.grossRockVolume(offset, contact, thickness)));
+                out.set(s, UnitQuantity.STOIIP, properties.stockTankOil(isochores
+                        ? trap.nodeVolume().grossRockVolume(in.columns(), unit, ref, contact)
+                        : trap.areaDepth.grossRockVolume(offset, contact, thickness)));
             }
             if (atticFault >= 0 && Double.isFinite(contact)) {
                 double after = AtticAnalysis.contactAfterDepletion(contact, connection[s], in.drainageDepth());
                 out.set(s, UnitQuantity.CONNECTION_DEPTH, connection[s]);
                 out.set(s, UnitQuantity.ATTIC_CONTACT, after);
                 out.set(s, UnitQuantity.ATTIC_COLUMN, Math.max(0, after - crest));
-                out.set(s, UnitQuantity.ATTIC_STOIIP,
-                        properties.stockTankOil(trap.areaDepth.grossRockVolume(offset, after, thickness)));
+                out.set(s, UnitQuantity.ATTIC_STOIIP, properties.stockTankOil(isochores
+                        ? trap.nodeVolume().grossRockVolume(in.columns(), unit, ref, after)
+                        : trap.areaDepth.grossRockVolume(offset, after, thickness)));
             }
         }
         return out;
@@ -103,7 +108,7 @@ final class RealisationEvaluator {
     private ReferenceTrap referenceTrap(RealisationInputs in) {
         if (in.residual() == null) {
             return new ReferenceTrap(geometry.crest.z() + in.depthShift(), geometry.spill.depth() + in.depthShift(),
-                    geometry.areaDepth, in.depthShift());
+                    geometry.areaDepth, in.depthShift(), geometry.study.referenceTop(), geometry.trapped);
         }
         RegularGrid nominal = geometry.study.referenceTop();
         GridGeometry g = nominal.geometry();
@@ -114,14 +119,21 @@ final class RealisationEvaluator {
         RegularGrid perturbed = new RegularGrid(g, values);
         Crest crest = CrestFinder.find(perturbed, geometry.compartment);
         SpillPoint spill = new SpillPointFinder().find(perturbed, geometry.barriers, crest);
-        return new ReferenceTrap(crest.z(), spill.depth(), new AreaDepthTable(perturbed, geometry.trappedPart(spill)),
-                0);
+        GridMask trapped = geometry.trappedPart(spill);
+        return new ReferenceTrap(crest.z(), spill.depth(), new AreaDepthTable(perturbed, trapped), 0, perturbed,
+                trapped);
     }
 
     /** The reference top's trap in one realisation; offsets of deeper units are added to the table's surface. */
-    private record ReferenceTrap(double crestDepth, double spillDepth, AreaDepthTable areaDepth, double tableShift) {
+    private record ReferenceTrap(double crestDepth, double spillDepth, AreaDepthTable areaDepth, double tableShift,
+            RegularGrid surface, GridMask trapped) {
         double offsetOf(ResolvedColumn column, int unit, int ref) {
             return tableShift + column.top(unit) - column.top(ref);
+        }
+
+        /** Node-by-node volumes for thicknesses that vary with position. */
+        IsochoreRockVolume nodeVolume() {
+            return new IsochoreRockVolume(surface, trapped, tableShift);
         }
     }
 }

@@ -13,30 +13,24 @@ final class ResultAccumulator {
     /** The results of consecutive realisations evaluated by one worker. */
     static final class Block {
         final RealisationOutcome[] outcomes;
-        /**
-         * Per fault, realisations in which each cell leaks, indexed by {@link FaultPlaneFrame#cell}. A byte holds the
-         * count of a block, and keeps the counts a worker writes small enough to stay in its cache.
-         */
-        final byte[][] leakCells;
+        /** The runs of leaking cells of these realisations. */
+        final LeakRuns leakRuns;
 
         Block(StudyGeometry geometry, int count) {
-            if (count > Byte.MAX_VALUE) {
-                throw new IllegalArgumentException("a block holds at most " + Byte.MAX_VALUE + " realisations, was "
-                        + count);
+            if (count > LeakRuns.MAX_REALISATIONS) {
+                throw new IllegalArgumentException("a block holds at most " + LeakRuns.MAX_REALISATIONS
+                        + " realisations, was " + count);
             }
             outcomes = new RealisationOutcome[count];
-            leakCells = new byte[geometry.faults.size()][];
-            for (FaultPlaneFrame frame : geometry.faults) {
-                leakCells[frame.index] = new byte[frame.cells()];
-            }
+            leakRuns = new LeakRuns(geometry.faults);
         }
     }
 
     private final StudyGeometry geometry;
     private final List<Map<UnitQuantity, StreamingSummary>> statistics = new ArrayList<>();
     private final long[][] mechanismCounts;
-    /** Laid out like {@link Block#leakCells}; turned row by row in {@link #leakMaps()}. */
-    private final long[][] leakCounts;
+    /** Summed differences of the blocks' {@link LeakRuns}; integrated once, in {@link #leakMaps()}. */
+    private final long[][] leakDifferences;
     private int realisations;
 
     ResultAccumulator(StudyGeometry geometry, int reservoirUnits) {
@@ -49,10 +43,7 @@ final class ResultAccumulator {
             statistics.add(perQuantity);
         }
         mechanismCounts = new long[reservoirUnits][Mechanism.values().length];
-        leakCounts = new long[geometry.faults.size()][];
-        for (FaultPlaneFrame frame : geometry.faults) {
-            leakCounts[frame.index] = new long[frame.cells()];
-        }
+        leakDifferences = LeakRuns.newTotals(geometry.faults);
     }
 
     void merge(Block block) {
@@ -69,12 +60,7 @@ final class ResultAccumulator {
                 mechanismCounts[s][outcome.mechanism[s].ordinal()]++;
             }
         }
-        for (int f = 0; f < leakCounts.length; f++) {
-            byte[] cells = block.leakCells[f];
-            for (int c = 0; c < cells.length; c++) {
-                leakCounts[f][c] += cells[c];
-            }
-        }
+        block.leakRuns.addTo(leakDifferences);
     }
 
     int realisations() {
@@ -96,13 +82,10 @@ final class ResultAccumulator {
     List<LeakProbabilityMap> leakMaps() {
         List<LeakProbabilityMap> maps = new ArrayList<>();
         for (FaultPlaneFrame frame : geometry.faults) {
-            long[] counts = leakCounts[frame.index];
+            long[] counts = LeakRuns.integrate(frame, leakDifferences[frame.index]);
             double[] probability = new double[counts.length];
-            for (int column = 0; column < frame.columns; column++) {
-                for (int row = 0; row < frame.rows; row++) {
-                    long count = counts[frame.cell(column, row)];
-                    probability[row * frame.columns + column] = realisations == 0 ? 0 : count / (double) realisations;
-                }
+            for (int c = 0; c < counts.length; c++) {
+                probability[c] = realisations == 0 ? 0 : counts[c] / (double) realisations;
             }
             maps.add(new LeakProbabilityMap(frame.bounding.id(), frame.u.clone(), frame.zTop, frame.cellHeight,
                     frame.rows, probability));

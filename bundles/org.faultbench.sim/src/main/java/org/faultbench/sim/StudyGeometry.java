@@ -23,6 +23,8 @@ final class StudyGeometry {
     final GridMask barriers;
     final Crest crest;
     final SpillPoint spill;
+    /** Nodes of the compartment above the nominal spill point. */
+    final GridMask trapped;
     final AreaDepthTable areaDepth;
     final List<FaultPlaneFrame> faults;
     final int referenceUnit;
@@ -39,7 +41,8 @@ final class StudyGeometry {
         }
         crest = CrestFinder.find(top, compartment);
         spill = new SpillPointFinder().find(top, barriers, crest);
-        areaDepth = new AreaDepthTable(top, trappedPart(spill));
+        trapped = trappedPart(spill);
+        areaDepth = new AreaDepthTable(top, trapped);
         ResolvedColumn nominal = study.stratigraphy().nominal();
         faults = new ArrayList<>();
         for (int f = 0; f < study.faults().size(); f++) {

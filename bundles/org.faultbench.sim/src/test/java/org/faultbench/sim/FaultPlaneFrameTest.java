@@ -1,10 +1,7 @@
 package org.faultbench.sim;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.HashSet;
-import java.util.Set;
 import java.util.SplittableRandom;
 
 import org.junit.jupiter.api.Test;
@@ -44,18 +41,5 @@ class FaultPlaneFrameTest {
                 assertEquals(expected, frame.firstRowCentredAtOrBelow(z), "z " + z + ", cell height " + cellHeight);
             }
         }
-    }
-
-    @Test
-    void everyCellHasItsOwnIndexColumnByColumn() {
-        FaultPlaneFrame frame = frame(5);
-        Set<Integer> indexes = new HashSet<>();
-        for (int column = 0; column < frame.columns; column++) {
-            for (int row = 0; row < frame.rows; row++) {
-                int cell = frame.cell(column, row);
-                assertTrue(cell >= 0 && cell < frame.cells() && indexes.add(cell));
-            }
-        }
-        assertEquals(frame.rows, frame.cell(1, 0), "the rows of a column lie side by side");
     }
 }

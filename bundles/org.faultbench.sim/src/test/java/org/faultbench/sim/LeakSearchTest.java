@@ -121,12 +121,12 @@ class LeakSearchTest {
                 double[] connection = new double[slots];
                 LeakLocation[] locations = new LeakLocation[slots];
                 ResultAccumulator.Block block = new ResultAccumulator.Block(geometry, 1);
-                search.run(in, buoyancy, spill, leak, connection, locations, marking ? block.leakCells : null);
+                search.run(in, buoyancy, spill, leak, connection, locations, marking ? block.leakRuns : null);
                 assertArrayEquals(expected.leak, leak, 0, where);
                 assertArrayEquals(expected.connection, connection, 0, where);
                 assertArrayEquals(expected.locations, locations, where);
                 if (marking) {
-                    marks += assertSameCells(geometry, expected.cells, block.leakCells, where);
+                    marks += assertSameCells(geometry, expected.cells, block.leakRuns, where);
                 }
                 leaks += (int) Arrays.stream(leak).filter(Double::isFinite).count();
             }
@@ -144,13 +144,14 @@ class LeakSearchTest {
         return slot;
     }
 
-    private static int assertSameCells(StudyGeometry geometry, int[][] expected, byte[][] actual, String where) {
+    private static int assertSameCells(StudyGeometry geometry, int[][] expected, LeakRuns actual, String where) {
         int marked = 0;
         for (FaultPlaneFrame frame : geometry.faults) {
+            long[] counts = actual.counts(frame);
             for (int column = 0; column < frame.columns; column++) {
                 for (int row = 0; row < frame.rows; row++) {
                     int count = expected[frame.index][row * frame.columns + column];
-                    assertEquals(count, actual[frame.index][frame.cell(column, row)],
+                    assertEquals(count, counts[row * frame.columns + column],
                             where + ", cell " + column + "/" + row);
                     marked += count;
                 }

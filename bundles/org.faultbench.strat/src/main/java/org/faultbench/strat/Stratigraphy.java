@@ -10,7 +10,6 @@ import java.util.Map;
 
 import org.apache.commons.math3.random.RandomGenerator;
 import org.faultbench.core.column.ResolvedColumn;
-import org.faultbench.core.column.UnitSlice;
 
 /**
  * The stratigraphic template: units ordered shallowest first, with the unit whose top is the mapped reference
@@ -54,24 +53,45 @@ public record Stratigraphy(List<StratUnit> units, int referenceUnitIndex, Thickn
         return units.get(referenceUnitIndex);
     }
 
-    /** The column with every property at its nominal value. */
+    /**
+     * The column with every property at its nominal value; with isochores, each at its mean thickness (a column for
+     * displays: {@link #nominalDraw()} resolves the column of a position).
+     */
     public ResolvedColumn nominal() {
-        List<UnitSlice> slices = new ArrayList<>(units.size());
-        for (StratUnit unit : units) {
-            slices.add(slice(unit, thicknessModel.thicknessOf(unit).nominal(), unit.clayFraction().nominal()));
-        }
-        return new ResolvedColumn(slices);
+        return nominalDraw().representative();
     }
 
-    /** One realisation of the column: per unit, shallowest first, one draw for thickness then one for clay fraction. */
-    public ResolvedColumn sample(RandomGenerator rng) {
-        List<UnitSlice> slices = new ArrayList<>(units.size());
-        for (StratUnit unit : units) {
-            double thickness = thicknessModel.thicknessOf(unit).sample(rng);
-            double clayFraction = unit.clayFraction().sample(rng);
-            slices.add(slice(unit, thickness, clayFraction));
+    /** Every draw at its nominal value (an isochore's scale factor at its nominal value). */
+    public ColumnDraw nominalDraw() {
+        double[] thickness = new double[units.size()];
+        double[] clay = new double[units.size()];
+        for (int i = 0; i < thickness.length; i++) {
+            thickness[i] = thicknessModel.thicknessOf(units.get(i)).nominal();
+            clay[i] = units.get(i).clayFraction().nominal();
         }
-        return new ResolvedColumn(slices);
+        return new ColumnDraw(this, thickness, clay);
+    }
+
+    /**
+     * One realisation of the column: per unit, shallowest first, one draw for thickness then one for clay fraction.
+     * With isochores, the representative column of {@link #sampleDraw}.
+     */
+    public ResolvedColumn sample(RandomGenerator rng) {
+        return sampleDraw(rng).representative();
+    }
+
+    /**
+     * One realisation's draws, in the order of {@link #sample}: per unit its thickness (for an isochore unit, the scale
+     * factor of its grid) then its clay fraction. Resolve the column of a position with {@link ColumnDraw#columnAt}.
+     */
+    public ColumnDraw sampleDraw(RandomGenerator rng) {
+        double[] thickness = new double[units.size()];
+        double[] clay = new double[units.size()];
+        for (int i = 0; i < thickness.length; i++) {
+            thickness[i] = thicknessModel.thicknessOf(units.get(i)).sample(rng);
+            clay[i] = units.get(i).clayFraction().sample(rng);
+        }
+        return new ColumnDraw(this, thickness, clay);
     }
 
     /** Nominal reservoir properties, one per unit in column order. */
@@ -133,10 +153,6 @@ public record Stratigraphy(List<StratUnit> units, int referenceUnitIndex, Thickn
             }
             above = i;
         }
-    }
-
-    private static UnitSlice slice(StratUnit unit, double thickness, double clayFraction) {
-        return new UnitSlice(unit.name(), unit.lithology(), unit.reservoir(), thickness, clayFraction);
     }
 
     private static void requireUniqueNames(List<StratUnit> units) {

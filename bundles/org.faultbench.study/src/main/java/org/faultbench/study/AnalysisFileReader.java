@@ -124,9 +124,10 @@ public final class AnalysisFileReader {
 
     private static TrapStudy readStudy(JsonNode doc, Path folder) throws StudyFormatException {
         String title = doc.optional("name").isPresent() ? doc.field("name").string() : null;
-        Stratigraphy strat = readStratigraphy(doc.field("stratigraphy"));
+        Stratigraphy layerCake = readStratigraphy(doc.field("stratigraphy"));
         RegularGrid top = readGrid(doc.field("referenceTop"), folder);
         Polygon compartment = readPolygon(doc.field("compartment"));
+        Stratigraphy strat = IsochoreFields.read(doc.field("stratigraphy"), layerCake, folder, top, compartment);
         List<BoundingFault> faults = new ArrayList<>();
         for (JsonNode f : doc.field("faults").array()) {
             faults.add(readFault(f, top, strat.referenceUnit().name()));
@@ -186,7 +187,8 @@ public final class AnalysisFileReader {
         String name = u.field("name").string();
         LithologyClass lithology = lithology(u.field("lithology"));
         boolean reservoir = u.has("reservoir") ? u.field("reservoir").bool() : lithology == LithologyClass.RESERVOIR;
-        UncertainValue thickness = UncertainValueFormat.read(u.field("thickness"));
+        UncertainValue thickness = IsochoreFields.isIsochore(u.field("thickness")) ? UncertainValue.fixed(0)
+                : UncertainValueFormat.read(u.field("thickness")); // an isochore's thickness comes from its grid
         UncertainValue vcl = UncertainValueFormat.read(u.field("vcl"));
         if (!reservoir) {
             return UncertainValueFormat.wrap(u, () -> StratUnit.nonReservoir(name, lithology, thickness, vcl));
@@ -208,8 +210,13 @@ public final class AnalysisFileReader {
         }
     }
 
-    private static RegularGrid readGrid(JsonNode node, Path folder) throws StudyFormatException {
-        JsonNode fileNode = node.field("grid");
+    static RegularGrid readGrid(JsonNode node, Path folder) throws StudyFormatException {
+        return readGrid(node, "grid", folder);
+    }
+
+    /** Reads the grid named by field {@code fileField} of {@code node}, with its optional format and unit. */
+    static RegularGrid readGrid(JsonNode node, String fileField, Path folder) throws StudyFormatException {
+        JsonNode fileNode = node.field(fileField);
         Path gridFile = folder.resolve(fileNode.string());
         String format = node.has("format") ? node.field("format").string() : "esri-ascii";
         LengthUnit unit = node.has("unit") ? lengthUnit(node.field("unit")) : LengthUnit.METRE;

@@ -45,6 +45,9 @@ final class DomeStudyFiles {
             }
             """;
 
+    /** Grid of the reference top. */
+    static final GridGeometry GRID = new GridGeometry(201, 201, -2000, -2000, 20, 20);
+
     private DomeStudyFiles() {
     }
 
@@ -54,7 +57,7 @@ final class DomeStudyFiles {
 
     /** Writes the grid and the given JSON text; returns the JSON file. */
     static Path writeJson(Path dir, double throwMetres, String json) throws IOException {
-        GridGeometry g = new GridGeometry(201, 201, -2000, -2000, 20, 20);
+        GridGeometry g = GRID;
         RegularGrid top = RegularGrid.sample(g,
                 (x, y) -> 1000 + 0.05 * Math.hypot(x + 500, y) + (x > 0 ? throwMetres : 0));
         new EsriAsciiGridWriter(FileUnits.METRES, 4).write(top, dir.resolve("top.asc"));
