@@ -126,17 +126,17 @@ final class PdfLayout implements AutoCloseable {
     }
 
     /** An image scaled to the text width (never enlarged beyond 0.75 pt per pixel). */
-    void image(BufferedImage image) throws IOException {
+    void image(BufferedImage image, float keepBelow) throws IOException {
         PDImageXObject xObject = LosslessFactory.createFromImage(document, image);
         float scale = Math.min(width / image.getWidth(), 0.75f);
         float w = image.getWidth() * scale;
         float h = image.getHeight() * scale;
-        float maxHeight = PDRectangle.A4.getHeight() - 2 * MARGIN - 40;
+        float maxHeight = PDRectangle.A4.getHeight() - 2 * MARGIN - 90;
         if (h > maxHeight) {
             w *= maxHeight / h;
             h = maxHeight;
         }
-        need(h + 4);
+        need(h + 4 + keepBelow);
         y -= h;
         content.drawImage(xObject, MARGIN + (width - w) / 2, y, w, h);
         y -= 4;

@@ -66,7 +66,7 @@ public final class PdfReportWriter {
             layout.table(t.headers(), t.rows(), widths(layout.width(), t), 8f);
             layout.space(8);
         } else if (block instanceof Block.Figure f) {
-            layout.image(f.image());
+            layout.image(f.image(), 3 * 8.5f * 1.3f);
             layout.text(f.caption(), PdfLayout.REGULAR, 8.5f, 0);
             layout.space(10);
         }

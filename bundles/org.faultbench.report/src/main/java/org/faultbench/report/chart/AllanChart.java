@@ -142,23 +142,28 @@ public final class AllanChart {
         g.setColor(Palette.GREEN);
         g.setStroke(new BasicStroke(2.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, DASHES[level], 0f));
         g.draw(shapes.toShape(across));
+        String text = c.name() + " " + LEVELS[level];
+        Color ink = new Color(0x00, 0x6B, 0x4E);
         double right = frame.px(across.getEnvelopeInternal().getMaxX());
-        label(c.name() + " " + LEVELS[level], right + 4, frame.py(z) + 4, new Color(0x00, 0x6B, 0x4E), labelBoxes);
+        double left = frame.px(across.getEnvelopeInternal().getMinX());
+        if (!label(text, right + 4, frame.py(z) + 4, ink, labelBoxes)) {
+            frame.graphics().setFont(PlotFrame.SMALL);
+            label(text, left - 4 - frame.graphics().getFontMetrics().stringWidth(text), frame.py(z) + 4, ink,
+                    labelBoxes);
+        }
     }
 
     /** A label with a white halo, skipped when it would overlap one already placed. */
-    private void label(String text, double x, double y, Color colour, List<double[]> boxes) {
+    private boolean label(String text, double x, double y, Color colour, List<double[]> boxes) {
         Graphics2D g = frame.graphics();
         g.setFont(PlotFrame.SMALL);
         FontMetrics fm = g.getFontMetrics();
         double w = fm.stringWidth(text);
-        if (x + w > frame.right() - 2) {
-            x = frame.right() - 2 - w;
-        }
+        x = Math.max(frame.left() + 2, Math.min(x, frame.right() - 2 - w));
         double[] box = { x - 2, y - fm.getAscent() - 1, x + w + 2, y + 3 };
         for (double[] b : boxes) {
             if (box[0] < b[2] && b[0] < box[2] && box[1] < b[3] && b[1] < box[3]) {
-                return;
+                return false;
             }
         }
         boxes.add(box);
@@ -166,6 +171,7 @@ public final class AllanChart {
         g.fill(new java.awt.geom.Rectangle2D.Double(box[0], box[1], box[2] - box[0], box[3] - box[1]));
         g.setColor(colour);
         g.drawString(text, (float) x, (float) y);
+        return true;
     }
 
     private void legend() {

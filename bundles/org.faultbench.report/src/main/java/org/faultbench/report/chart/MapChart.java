@@ -69,7 +69,7 @@ public final class MapChart {
         double[] range = depthRange();
         shade(frame, range);
         frame.clip();
-        double interval = Ticks.step(range[0], range[1], 30);
+        double interval = Ticks.step(range[0], range[1], 45);
         contours(frame, range, interval);
         outline(frame);
         faultTraces(frame);
@@ -208,7 +208,7 @@ public final class MapChart {
         }
         path.closePath();
         Graphics2D g = frame.graphics();
-        g.setColor(new Color(0xD5, 0x5E, 0x00, 60));
+        g.setColor(new Color(0xD5, 0x5E, 0x00, 35));
         g.fill(path);
         g.setColor(Palette.VERMILLION);
         g.setStroke(new BasicStroke(2.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] { 9f, 5f },

@@ -29,6 +29,7 @@ public final class PlotFrame {
     private final double yMin;
     private final double yMax;
     private final boolean yDown;
+    private boolean yTicks = true;
 
     /**
      * @param margins left, top, right, bottom margins in pixels around the plot area
@@ -104,6 +105,11 @@ public final class PlotFrame {
         g.setClip(null);
     }
 
+    /** Leaves out the y-axis ticks, for charts whose rows are categories. */
+    public void hideYTicks() {
+        yTicks = false;
+    }
+
     /** Frame, ticks with labels on all used axes, light grid lines, axis titles and the chart title. */
     public void axes(String title, String xLabel, String yLabel, boolean grid) {
         g.setFont(SMALL);
@@ -117,7 +123,7 @@ public final class PlotFrame {
             String text = number(x);
             g.drawString(text, (float) (p - fm.stringWidth(text) / 2.0), bottom + 7 + fm.getAscent());
         }
-        for (double y : Ticks.values(yMin, yMax, Math.max(2, (bottom - top) / 60))) {
+        for (double y : yTicks ? Ticks.values(yMin, yMax, Math.max(2, (bottom - top) / 60)) : java.util.List.<Double>of()) {
             double p = py(y);
             if (grid) {
                 line(Palette.GRID_LINE, 1, left, p, right, p);

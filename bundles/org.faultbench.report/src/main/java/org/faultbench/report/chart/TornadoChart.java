@@ -33,6 +33,7 @@ public final class TornadoChart {
         int height = 34 + 62 + Math.max(1, shown.size()) * BAR_HEIGHT + 36;
         PlotFrame frame = new PlotFrame(WIDTH, height, new int[] { LEFT, 34, 30, 98 }, min - pad, max + pad, 0,
                 Math.max(1, shown.size()), true);
+        frame.hideYTicks();
         frame.axes(title, "contact depth [m TVDSS]", null, false);
         var g = frame.graphics();
         g.setFont(PlotFrame.SMALL);
@@ -68,14 +69,13 @@ public final class TornadoChart {
         g.fillRect(x, y - 10, 16, 12);
         g.setColor(Palette.INK);
         g.drawString("input at its P90 (low case)", x + 22, y);
-        x += 210;
+        x += 190;
         g.setColor(Palette.ORANGE);
         g.fillRect(x, y - 10, 16, 12);
         g.setColor(Palette.INK);
         g.drawString("input at its P10 (high case)", x + 22, y);
-        x += 220;
-        g.drawString(String.format(java.util.Locale.ROOT, "| base case %.1f m (all inputs at median)", baseContact),
-                x, y);
+        x += 200;
+        g.drawString(String.format(java.util.Locale.ROOT, "| base case %.1f m", baseContact), x, y);
     }
 
     private static String fit(String text, FontMetrics fm, int width) {
