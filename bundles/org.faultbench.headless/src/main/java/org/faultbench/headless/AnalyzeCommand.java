@@ -2,10 +2,13 @@ package org.faultbench.headless;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.List;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
 
+import org.faultbench.report.ReportFiles;
+import org.faultbench.report.ReportInput;
 import org.faultbench.sim.MonteCarloSimulator;
 import org.faultbench.sim.SimulationResult;
 import org.faultbench.sim.SimulationSettings;
@@ -15,12 +18,13 @@ import org.faultbench.study.ResultsWriter;
 import org.faultbench.study.StudyFormatException;
 
 /**
- * {@code analyze <analysis file> [--realisations N] [--seed S] [--threads T] [--out DIR]}: reads the analysis file,
- * runs the Monte Carlo trap analysis and writes results.json, summary.csv and the leak-probability tables to DIR.
- * Options left out take the analysis file's own values.
+ * {@code analyze <analysis file> [--realisations N] [--seed S] [--threads T] [--out DIR] [--no-report]}: reads the
+ * analysis file, runs the Monte Carlo trap analysis and writes results.json, summary.csv and the leak-probability
+ * tables to DIR, then report.html and report.pdf unless --no-report. Options left out take the analysis file's own
+ * values. The report is rendered before anything is written, so a report that cannot be made leaves DIR untouched.
  */
-record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong seed, int threads, Path outDir)
-        implements BatchCommand {
+record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong seed, int threads, Path outDir,
+        boolean report) implements BatchCommand {
 
     static final Path DEFAULT_OUT = Path.of("faultbench-results");
 
@@ -33,8 +37,14 @@ record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong 
         OptionalLong seed = OptionalLong.empty();
         int threads = Runtime.getRuntime().availableProcessors();
         Path out = DEFAULT_OUT;
+        boolean report = true;
         for (int i = 1; i < args.size(); i += 2) {
             String option = args.get(i);
+            if (option.equals("--no-report")) {
+                report = false;
+                i--;
+                continue;
+            }
             if (i + 1 >= args.size()) {
                 return new UsageError("option " + option + " needs a value");
             }
@@ -60,7 +70,7 @@ record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong 
                 return new UsageError("option " + option + " expects a whole number, got '" + value + "'");
             }
         }
-        return new AnalyzeCommand(file, realisations, seed, threads, out);
+        return new AnalyzeCommand(file, realisations, seed, threads, out, report);
     }
 
     private static int positiveInt(String option, String value) {
@@ -92,8 +102,24 @@ record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong 
             context.err().println("faultbench: the analysis failed: " + e);
             return ExitCode.FAILED;
         }
+        ReportFiles reportFiles = null;
+        if (report) {
+            context.err().println("Rendering report (HTML and PDF)");
+            try {
+                reportFiles = ReportFiles.render(new ReportInput(analysis, result, context.programVersion(),
+                        LocalDate.now()));
+            } catch (IOException | RuntimeException e) {
+                context.err().println("faultbench: cannot make the report (nothing written; --no-report skips it): "
+                        + e);
+                return ExitCode.FAILED;
+            }
+        }
         try {
             new ResultsWriter(context.programVersion()).write(analysis, result, outDir);
+            if (reportFiles != null) {
+                context.err().println("Writing report.html and report.pdf");
+                reportFiles.writeTo(outDir);
+            }
         } catch (IOException e) {
             context.err().println("faultbench: cannot write results to " + outDir + ": " + e.getMessage());
             return ExitCode.FAILED;

@@ -15,6 +15,8 @@ public class HeadlessApplication implements IApplication {
 
     @Override
     public Object start(IApplicationContext context) {
+        // report images are drawn into memory with java.awt; never open a display for that
+        System.setProperty("java.awt.headless", "true");
         String[] args = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         context.applicationRunning();
         return Integer.valueOf(run(args == null ? new String[0] : args, System.out, System.err));

@@ -1,6 +1,7 @@
 package org.faultbench.headless;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -55,6 +56,15 @@ class BatchCommandTest {
         assertEquals(42L, a.seed().getAsLong());
         assertEquals(2, a.threads());
         assertEquals(Path.of("res"), a.outDir());
+        assertTrue(a.report(), "the report is written unless --no-report");
+    }
+
+    @Test
+    void noReportIsAFlagWithoutValue() {
+        AnalyzeCommand a = assertInstanceOf(AnalyzeCommand.class, BatchCommand.parse(new String[] { "analyze",
+                "study.json", "--no-report", "--seed", "3" }));
+        assertFalse(a.report());
+        assertEquals(3L, a.seed().getAsLong());
     }
 
     @Test

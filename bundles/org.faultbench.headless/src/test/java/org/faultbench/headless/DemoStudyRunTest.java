@@ -47,5 +47,11 @@ class DemoStudyRunTest {
             assertTrue(p90 <= p50 && p50 <= p10, "exceedance order P90 <= P50 <= P10 for " + unit);
         }
         assertTrue(Files.readString(results.resolve("summary.csv")).lines().count() > 5);
+        assertTrue(Files.size(results.resolve("report.pdf")) > 0 && Files.size(results.resolve("report.html")) > 0,
+                "report written beside results.json");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("Writing report.html and report.pdf"));
+        try (var staging = Files.list(dir)) {
+            assertEquals(1, staging.count(), "no staging folder left behind");
+        }
     }
 }
