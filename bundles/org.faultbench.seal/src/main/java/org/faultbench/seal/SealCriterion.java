@@ -23,6 +23,18 @@ public interface SealCriterion {
 
     SealEvaluation evaluate(FaultPointContext ctx);
 
+    /**
+     * This criterion with the settings an analysis file gives in {@code seal.parameters}, for contributed criteria
+     * (the built-ins read their own fields). Returns a new instance, since one registered instance is shared; the
+     * default accepts no parameters.
+     *
+     * @throws IllegalArgumentException when a parameter is unknown or invalid; the message starts with its key
+     */
+    default SealCriterion configured(CriterionParameters parameters) {
+        parameters.requireOnly(List.of());
+        return this;
+    }
+
     /** One warning for each unit in the throw window whose lithology the criterion is not valid for. */
     default List<ApplicabilityWarning> applicabilityWarnings(FaultPointContext ctx) {
         ThrowWindow window = ThrowWindow.of(ctx);

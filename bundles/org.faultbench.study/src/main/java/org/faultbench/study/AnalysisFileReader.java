@@ -133,7 +133,7 @@ public final class AnalysisFileReader {
             faults.add(readFault(f, top, strat.referenceUnit().name()));
         }
         FluidContrast fluids = readFluids(doc.field("fluids"));
-        SealSetup seal = readSeal(doc.field("seal"), fluids.kind(), doc.field("fluids"));
+        SealSetup seal = readSeal(doc.field("seal"), fluids.kind(), doc.field("fluids"), folder);
         DepthUncertainty depth = doc.has("depthUncertainty") ? readDepth(doc.field("depthUncertainty"))
                 : DepthUncertainty.NONE;
         Optional<UncertainValue> spill = optionalValue(doc, "spillDepth");
@@ -341,8 +341,9 @@ public final class AnalysisFileReader {
         }
     }
 
-    private static SealSetup readSeal(JsonNode node, FluidKind trapped, JsonNode fluids) throws StudyFormatException {
-        SealCriterion criterion = criterion(node);
+    private static SealSetup readSeal(JsonNode node, FluidKind trapped, JsonNode fluids, Path folder)
+            throws StudyFormatException {
+        SealCriterion criterion = ContributedCriterionParameters.configure(criterion(node), node, folder);
         double burial = node.field("burialDepth").number();
         UncertainValue shift = node.has("calibrationShift") ? UncertainValueFormat.read(node.field("calibrationShift"))
                 : UncertainValue.fixed(0);

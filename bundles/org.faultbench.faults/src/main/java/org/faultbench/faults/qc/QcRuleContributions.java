@@ -1,13 +1,9 @@
 package org.faultbench.faults.qc;
 
-import java.util.ArrayList;
 import java.util.List;
 
-import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.IConfigurationElement;
-import org.eclipse.core.runtime.IExtensionRegistry;
-import org.eclipse.core.runtime.ILog;
-import org.eclipse.core.runtime.RegistryFactory;
+import org.faultbench.core.extension.ContributionReader;
 
 /**
  * Reads the {@value #POINT} extension point into a {@link QcRuleCatalog}. A bad contribution (missing id, class
@@ -17,6 +13,7 @@ import org.eclipse.core.runtime.RegistryFactory;
 public final class QcRuleContributions {
 
     public static final String POINT = "org.faultbench.faults.qcRules";
+    private static final ContributionReader READER = new ContributionReader("fault QC rule", "rule");
     private static QcRuleCatalog platformCatalog;
 
     private QcRuleContributions() {
@@ -29,12 +26,7 @@ public final class QcRuleContributions {
     public static synchronized QcRuleCatalog platformCatalog() {
         if (platformCatalog == null) {
             QcRuleCatalog catalog = QcRuleCatalog.withBuiltIns();
-            IExtensionRegistry registry = RegistryFactory.getRegistry();
-            if (registry != null) {
-                for (String problem : readInto(catalog, registry.getConfigurationElementsFor(POINT))) {
-                    ILog.of(QcRuleContributions.class).warn(problem);
-                }
-            }
+            ContributionReader.log(QcRuleContributions.class, readInto(catalog, ContributionReader.platformElements(POINT)));
             platformCatalog = catalog;
         }
         return platformCatalog;
@@ -42,28 +34,6 @@ public final class QcRuleContributions {
 
     /** Registers every valid contribution; returns one message per skipped contribution. */
     public static List<String> readInto(QcRuleCatalog catalog, IConfigurationElement[] elements) {
-        List<String> problems = new ArrayList<>();
-        for (IConfigurationElement element : elements) {
-            String contributor = element.getContributor() == null ? "?" : element.getContributor().getName();
-            String id = element.getAttribute("id");
-            String where = "fault QC rule '" + id + "' contributed by " + contributor + ": ";
-            if (!"rule".equals(element.getName()) || id == null || id.isBlank()) {
-                problems.add(where + "an element <rule> with an id is expected");
-                continue;
-            }
-            try {
-                Object created = element.createExecutableExtension("class");
-                if (!(created instanceof FaultQcRule rule)) {
-                    problems.add(where + "class " + created.getClass().getName() + " does not implement FaultQcRule");
-                } else if (!id.equals(rule.id())) {
-                    problems.add(where + "the object reports id '" + rule.id() + "'");
-                } else {
-                    catalog.register(rule);
-                }
-            } catch (CoreException | RuntimeException | LinkageError e) {
-                problems.add(where + "skipped: " + e.getMessage());
-            }
-        }
-        return problems;
+        return READER.read(elements, c -> catalog.register(c.createWithId(FaultQcRule.class, FaultQcRule::id)));
     }
 }
