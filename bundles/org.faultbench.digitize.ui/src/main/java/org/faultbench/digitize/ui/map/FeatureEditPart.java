@@ -5,7 +5,6 @@ import org.eclipse.gef.EditPolicy;
 import org.eclipse.gef.commands.Command;
 import org.eclipse.gef.editparts.AbstractGraphicalEditPart;
 import org.eclipse.gef.editpolicies.ComponentEditPolicy;
-import org.eclipse.gef.editpolicies.NonResizableEditPolicy;
 import org.eclipse.gef.requests.GroupRequest;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.ui.views.properties.IPropertySource;
@@ -65,9 +64,12 @@ public final class FeatureEditPart extends AbstractGraphicalEditPart {
                 return SheetEditCommand.removing(sheet(), feature());
             }
         });
-        boolean point = feature().geometry().getNumPoints() == 1;
-        installEditPolicy(EditPolicy.PRIMARY_DRAG_ROLE, point ? new NonResizableEditPolicy()
-                : new VertexHandlesPolicy());
+        // the primary drag role (vertex handles for lines) is installed by the sheet's layout policy
+    }
+
+    /** Whether the feature is a line (with vertex handles) rather than a point. */
+    boolean isLine() {
+        return feature().geometry().getNumPoints() > 1;
     }
 
     @Override

@@ -119,7 +119,7 @@ final class FeatureFigure extends Figure {
         } else if (feature instanceof FaultTraceFeature trace) {
             line(g, colour, 3.5, z);
             g.setLineWidth(width(2, z));
-            for (double[] t : TraceTicks.ticks(u, v, trace.hangingWallSide(), 9 / z)) {
+            for (double[] t : TraceTicks.ticks(u, v, trace.hangingWallSide(), 9 / z, 40 / z)) {
                 g.drawLine((int) Math.round(t[0]), (int) Math.round(t[1]), (int) Math.round(t[2]),
                         (int) Math.round(t[3]));
             }

@@ -87,6 +87,9 @@ final class SheetLayoutPolicy extends LayoutEditPolicy {
 
     @Override
     protected EditPolicy createChildEditPolicy(EditPart child) {
+        if (child instanceof FeatureEditPart feature && feature.isLine()) {
+            return new VertexHandlesPolicy();
+        }
         return new NonResizableEditPolicy();
     }
 
