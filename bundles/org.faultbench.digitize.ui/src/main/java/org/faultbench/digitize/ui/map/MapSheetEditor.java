@@ -22,6 +22,7 @@ import org.eclipse.gef.ui.palette.FlyoutPaletteComposite.FlyoutPreferences;
 import org.eclipse.gef.ui.parts.GraphicalEditorWithFlyoutPalette;
 import org.eclipse.gef.ui.parts.GraphicalViewerKeyHandler;
 import org.eclipse.gef.ui.properties.UndoablePropertySheetEntry;
+import org.eclipse.jface.action.IAction;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Display;
@@ -29,7 +30,9 @@ import org.eclipse.ui.IEditorInput;
 import org.eclipse.ui.IEditorSite;
 import org.eclipse.ui.IPathEditorInput;
 import org.eclipse.ui.IURIEditorInput;
+import org.eclipse.ui.IWorkbenchCommandConstants;
 import org.eclipse.ui.PartInitException;
+import org.eclipse.ui.actions.ActionFactory;
 import org.eclipse.ui.views.properties.IPropertySheetPage;
 import org.eclipse.ui.views.properties.PropertySheetPage;
 import org.faultbench.digitize.raster.ImagePyramid;
@@ -152,6 +155,28 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
         actions.registerAction(new ZoomInAction(zoom));
         actions.registerAction(new ZoomOutAction(zoom));
         actions.registerAction(new ZoomToFitAction(zoom));
+    }
+
+    /**
+     * Gives the stack actions the workbench command ids, so that the workbench's Edit commands (and their key
+     * bindings) find them as the active editor's handlers; GEF 3.2 leaves the definition ids empty.
+     */
+    @Override
+    protected void createActions() {
+        super.createActions();
+        ActionRegistry actions = getActionRegistry();
+        define(actions, ActionFactory.UNDO.getId(), IWorkbenchCommandConstants.EDIT_UNDO);
+        define(actions, ActionFactory.REDO.getId(), IWorkbenchCommandConstants.EDIT_REDO);
+        define(actions, ActionFactory.DELETE.getId(), IWorkbenchCommandConstants.EDIT_DELETE);
+        define(actions, ActionFactory.SELECT_ALL.getId(), IWorkbenchCommandConstants.EDIT_SELECT_ALL);
+        define(actions, ActionFactory.SAVE.getId(), IWorkbenchCommandConstants.FILE_SAVE);
+    }
+
+    private static void define(ActionRegistry actions, String id, String commandId) {
+        IAction action = actions.getAction(id);
+        if (action != null && action.getActionDefinitionId() == null) {
+            action.setActionDefinitionId(commandId);
+        }
     }
 
     @Override
