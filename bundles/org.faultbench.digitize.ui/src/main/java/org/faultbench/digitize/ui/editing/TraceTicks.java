@@ -21,8 +21,8 @@ public final class TraceTicks {
      * @param v drawing v of the trace vertices
      * @param side the hanging-wall side
      * @param length tick length in drawing units
-     * @param spacing distance between ticks along the trace in drawing units; the first tick is half a spacing
-     *        from the start, and a trace shorter than one spacing gets one tick at its middle
+     * @param spacing distance between ticks along the trace in drawing units; ticks start and end half a spacing
+     *        from the ends, and a trace shorter than one spacing gets one tick at its middle
      * @return one {u0, v0, u1, v1} per tick
      */
     public static List<double[]> ticks(double[] u, double[] v, TraceSide side, double length, double spacing) {
@@ -35,6 +35,7 @@ public final class TraceTicks {
             return ticks;
         }
         double next = total < spacing ? total / 2 : spacing / 2;
+        double last = total < spacing ? total / 2 : total - spacing / 2;
         double walked = 0;
         for (int i = 0; i + 1 < u.length; i++) {
             double du = u[i + 1] - u[i];
@@ -43,7 +44,7 @@ public final class TraceTicks {
             // with v pointing down, the left of direction (du, dv) as seen on screen is (dv, -du)
             double nu = side == TraceSide.LEFT ? dv / norm : -dv / norm;
             double nv = side == TraceSide.LEFT ? -du / norm : du / norm;
-            while (norm > 0 && next <= walked + norm) {
+            while (norm > 0 && next <= walked + norm && next <= last + 1e-9) {
                 double t = (next - walked) / norm;
                 double mu = u[i] + t * du;
                 double mv = v[i] + t * dv;
