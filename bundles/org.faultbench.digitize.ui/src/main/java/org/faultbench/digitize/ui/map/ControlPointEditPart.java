@@ -91,7 +91,7 @@ public final class ControlPointEditPart extends AbstractGraphicalEditPart {
             int cy = b.y + r;
             g.setAntialias(SWT.ON);
             g.setForegroundColor(worst ? MapColours.WORST_CONTROL_POINT : MapColours.CONTROL_POINT);
-            g.setLineWidth(FeatureFigure.width(2, zoom));
+            g.setLineWidth(FeatureFigure.width(2));
             g.setLineStyle(enabled ? SWT.LINE_SOLID : SWT.LINE_DOT);
             g.drawOval(cx - r / 2, cy - r / 2, r, r);
             g.drawLine(cx - r, cy, cx + r, cy);

@@ -25,8 +25,8 @@ import org.faultbench.digitize.ui.editing.TraceTicks;
  * One feature drawn in our map style: contours thin and coloured by depth with their value at the middle vertex,
  * fault traces heavy with ticks on the downthrown side, cut-offs dashed with an FW or HW tag, fault polygons
  * filled pale red, markers as symbols (crest triangle, spill diamond, leak cross in a circle) and wells as filled
- * circles with the name. Screen sizes (line widths, ticks, symbols) are divided by the zoom so they stay the same
- * on screen. Hit-testing follows the lines, not the bounding box, so a long contour does not hide what is under it.
+ * circles with the name. Tick lengths and symbol sizes are divided by the zoom so they stay the same on screen
+ * (line widths are not zoomed by draw2d 3.2 in the first place). Hit-testing follows the lines, not the bounding box, so a long contour does not hide what is under it.
  */
 final class FeatureFigure extends Figure {
     static final int MARGIN = 40;
@@ -118,7 +118,7 @@ final class FeatureFigure extends Figure {
             label(g, ContourLabels.text(contour.depth()), colour, z);
         } else if (feature instanceof FaultTraceFeature trace) {
             line(g, colour, 3.5, z);
-            g.setLineWidth(width(2, z));
+            g.setLineWidth(width(2));
             for (double[] t : TraceTicks.ticks(u, v, trace.hangingWallSide(), 9 / z, 40 / z)) {
                 g.drawLine((int) Math.round(t[0]), (int) Math.round(t[1]), (int) Math.round(t[2]),
                         (int) Math.round(t[3]));
@@ -146,7 +146,7 @@ final class FeatureFigure extends Figure {
         if (selected) {
             g.setForegroundColor(MapColours.SELECTED);
             g.setLineStyle(SWT.LINE_DOT);
-            g.setLineWidth(width(1, z));
+            g.setLineWidth(width(1));
             if (u.length > 1) {
                 g.drawPolyline(points());
             }
@@ -155,7 +155,7 @@ final class FeatureFigure extends Figure {
 
     private void line(Graphics g, Color c, double screenWidth, double z) {
         g.setForegroundColor(c);
-        g.setLineWidth(width(screenWidth, z));
+        g.setLineWidth(width(screenWidth));
         g.drawPolyline(points());
     }
 
@@ -194,8 +194,9 @@ final class FeatureFigure extends Figure {
         return points;
     }
 
-    static int width(double screenPixels, double zoom) {
-        return Math.max(1, (int) Math.round(screenPixels / zoom));
+    /** A line width in screen pixels: draw2d 3.2's scaled graphics zooms positions and fonts, not line widths. */
+    static int width(double screenPixels) {
+        return Math.max(1, (int) Math.round(screenPixels));
     }
 
 }

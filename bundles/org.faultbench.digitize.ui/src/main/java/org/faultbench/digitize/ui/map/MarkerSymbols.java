@@ -17,7 +17,7 @@ final class MarkerSymbols {
         int y = (int) Math.round(v);
         g.setBackgroundColor(colour);
         g.setForegroundColor(colour);
-        g.setLineWidth(FeatureFigure.width(2, zoom));
+        g.setLineWidth(FeatureFigure.width(2));
         switch (kind) {
             case CREST -> g.fillPolygon(new PointList(new int[] { x, y - r, x + r, y + r, x - r, y + r }));
             case SPILL -> g.fillPolygon(new PointList(new int[] { x, y - r, x + r, y, x, y + r, x - r, y }));

@@ -10,6 +10,7 @@ import org.eclipse.draw2d.geometry.PrecisionPoint;
 import org.eclipse.gef.EditPart;
 import org.eclipse.gef.EditPolicy;
 import org.eclipse.gef.editparts.AbstractGraphicalEditPart;
+import org.eclipse.gef.editparts.ZoomListener;
 import org.eclipse.gef.editpolicies.RootComponentEditPolicy;
 import org.eclipse.ui.views.properties.IPropertySource;
 import org.faultbench.digitize.raster.ImagePyramid;
@@ -37,6 +38,8 @@ public final class SheetEditPart extends AbstractGraphicalEditPart implements Ma
     private TileImageCache tiles;
     private RasterFigure raster;
     private double snapPixels = SnapTolerance.DEFAULT_SCREEN_PIXELS;
+    /** Symbol sizes and figure margins are in screen pixels, so the children are laid out again on zoom. */
+    private final ZoomListener relayout = zoom -> refreshChildVisuals();
 
     /** @param pyramid the scan's pyramid, or null for a sheet without a scan */
     public SheetEditPart(MapDocument document, ImagePyramid pyramid) {
@@ -112,6 +115,7 @@ public final class SheetEditPart extends AbstractGraphicalEditPart implements Ma
         super.activate();
         document().sheet().addListener(this);
         document().georeference().addListener(this);
+        ((MapRootEditPart) getRoot()).getZoomManager().addZoomListener(relayout);
         if (pyramid != null) {
             tiles = new TileImageCache(pyramid);
             raster = new RasterFigure(tiles, this::zoom);
@@ -123,6 +127,7 @@ public final class SheetEditPart extends AbstractGraphicalEditPart implements Ma
     public void deactivate() {
         document().sheet().removeListener(this);
         document().georeference().removeListener(this);
+        ((MapRootEditPart) getRoot()).getZoomManager().removeZoomListener(relayout);
         if (raster != null) {
             getLayer(MapRootEditPart.RASTER_LAYER).remove(raster);
             tiles.dispose();
@@ -150,6 +155,10 @@ public final class SheetEditPart extends AbstractGraphicalEditPart implements Ma
     @Override
     public void georeferenceChanged(Georeference georeference) {
         refreshChildren();
+        refreshChildVisuals();
+    }
+
+    private void refreshChildVisuals() {
         for (Object child : getChildren()) {
             ((EditPart) child).refresh();
         }
