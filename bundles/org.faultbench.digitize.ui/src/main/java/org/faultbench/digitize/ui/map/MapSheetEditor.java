@@ -21,7 +21,6 @@ import org.eclipse.gef.ui.palette.FlyoutPaletteComposite;
 import org.eclipse.gef.ui.palette.FlyoutPaletteComposite.FlyoutPreferences;
 import org.eclipse.gef.ui.parts.GraphicalEditorWithFlyoutPalette;
 import org.eclipse.gef.ui.parts.GraphicalViewerKeyHandler;
-import org.eclipse.gef.ui.properties.UndoablePropertySheetEntry;
 import org.eclipse.jface.action.IAction;
 import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.swt.SWT;
@@ -33,8 +32,6 @@ import org.eclipse.ui.IURIEditorInput;
 import org.eclipse.ui.IWorkbenchCommandConstants;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.actions.ActionFactory;
-import org.eclipse.ui.views.properties.IPropertySheetPage;
-import org.eclipse.ui.views.properties.PropertySheetPage;
 import org.faultbench.digitize.raster.ImagePyramid;
 import org.faultbench.digitize.ui.editing.MapDocument;
 import org.faultbench.digitize.ui.store.GeoJsonMapSheetStore;
@@ -45,7 +42,8 @@ import org.faultbench.digitize.ui.store.MapSheetDocumentStore;
  * The map editor: a scanned depth-structure map (drawn from its image pyramid) with the digitized sheet over it.
  * Opened on a scan image (its control points are read from the {@code .control-points.csv} beside it) or on a
  * map-sheet file. Every change goes through the GEF command stack, so the workbench's Undo and Redo, the dirty
- * mark and Save follow it; saving goes through a {@link MapSheetDocumentStore}.
+ * mark and Save follow it; saving goes through a {@link MapSheetDocumentStore}. The Properties view edits the
+ * selection through GEF's undoable property sheet, so attribute changes are commands too.
  */
 public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
     public static final String ID = "org.faultbench.digitize.ui.mapSheetEditor";
@@ -216,11 +214,6 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
         }
         if (type == MapDocument.class) {
             return document;
-        }
-        if (type == IPropertySheetPage.class) {
-            PropertySheetPage page = new PropertySheetPage();
-            page.setRootEntry(new UndoablePropertySheetEntry(getCommandStack()));
-            return page;
         }
         return super.getAdapter(type);
     }
