@@ -21,8 +21,9 @@ public class MapSheetView extends ViewPart {
         summary.setText(PURPOSE);
     }
 
-    /** What the view is for, shown until a study is loaded. */
-    static final String PURPOSE = "Georeferenced depth-structure maps, digitized contours, fault traces and cut-off lines.";
+    /** What the view is for and where digitizing happens (the map editor), shown until a study is loaded. */
+    static final String PURPOSE = "Georeferenced depth-structure maps, digitized contours, fault traces and cut-off lines."
+            + " Open a scanned map or a map sheet with File > Open Map... to digitize it in the map editor.";
 
     /** The text the view currently shows. */
     public String summaryText() {
