@@ -31,7 +31,7 @@ class StudyFilesFuzzTest {
                 valid.replace("CRITERION", "juxtaposition").getBytes(StandardCharsets.UTF_8));
         Path file = dir.resolve("study.json");
         AnalysisFileReader reader = new AnalysisFileReader();
-        System.out.println(FuzzRun.run("analysis file", seeds, StudyFormatException.class, in -> {
+        System.out.println(FuzzRun.run("analysis file", 600, seeds, StudyFormatException.class, in -> {
             Files.write(file, in);
             reader.read(file);
         }));

@@ -19,7 +19,7 @@ import java.util.concurrent.TimeoutException;
  * The failure message names the run seed, the input index and the input, so {@code -Dfaultbench.fuzz.seed=S}
  * replays it.
  *
- * <p>Inputs per reader: {@value #CI_ITERATIONS} by default (the CI run), or {@code -Dfaultbench.fuzz.iterations=N}
+ * <p>Inputs per reader: {@value #CI_ITERATIONS} by default (the CI run; fewer for slow readers), or {@code -Dfaultbench.fuzz.iterations=N}
  * (the long profile {@code -Pfuzz-long} sets 1,000,000).
  */
 public final class FuzzRun {
@@ -43,20 +43,27 @@ public final class FuzzRun {
     private FuzzRun() {
     }
 
-    public static int iterations() {
-        return Integer.getInteger("faultbench.fuzz.iterations", CI_ITERATIONS);
+    public static int iterations(int ciIterations) {
+        return Integer.getInteger("faultbench.fuzz.iterations", ciIterations);
     }
 
     public static long seed() {
         return Long.getLong("faultbench.fuzz.seed", 20261202L);
     }
 
-    /**
-     * Runs {@link #iterations()} inputs; {@code documented} is the checked exception the reader declares for bad
-     * input. The valid seeds themselves must parse (otherwise the fuzzer would test nothing).
-     */
+    /** Runs {@value #CI_ITERATIONS} inputs in CI, {@code faultbench.fuzz.iterations} when set. */
     public static Outcome run(String reader, List<byte[]> seeds, Class<? extends Exception> documented,
             Target target) throws InterruptedException {
+        return run(reader, CI_ITERATIONS, seeds, documented, target);
+    }
+
+    /**
+     * Runs {@code ciIterations} inputs (fewer for slow readers, to keep CI short), or
+     * {@code faultbench.fuzz.iterations} when set; {@code documented} is the checked exception the reader declares for bad
+     * input. The valid seeds themselves must parse (otherwise the fuzzer would test nothing).
+     */
+    public static Outcome run(String reader, int ciIterations, List<byte[]> seeds,
+            Class<? extends Exception> documented, Target target) throws InterruptedException {
         ExecutorService watchdog = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "fuzz " + reader);
             t.setDaemon(true);
@@ -69,7 +76,7 @@ public final class FuzzRun {
                     fail(reader + ": a valid seed input does not parse: " + problem, problem);
                 }
             }
-            int inputs = iterations();
+            int inputs = iterations(ciIterations);
             long runSeed = seed();
             int parsed = 0;
             for (int i = 0; i < inputs; i++) {

@@ -142,4 +142,13 @@ class GeoJsonReaderTest {
         FormatException wrongType = failure("{\"type\": \"Topology\"}");
         assertTrue(wrongType.getMessage().contains("found type 'Topology'"), wrongType.getMessage());
     }
+
+    @Test
+    void nonFiniteCoordinatesAreRefused() {
+        // NaN and infinity audit (issue #9): an overflowing literal and NaN must not become coordinates
+        for (String bad : new String[] {"1e400", "NaN", "-Infinity"}) {
+            FormatException e = failure(SAMPLE.replace("[1500.5, 2600, 1810]", "[1500.5, " + bad + ", 1810]"));
+            assertEquals(3, e.line(), bad + ": " + e.getMessage());
+        }
+    }
 }
