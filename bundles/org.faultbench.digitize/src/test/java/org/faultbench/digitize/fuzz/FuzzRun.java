@@ -19,8 +19,8 @@ import java.util.concurrent.TimeoutException;
  * The failure message names the run seed, the input index and the input, so {@code -Dfaultbench.fuzz.seed=S}
  * replays it.
  *
- * <p>Inputs per reader: {@value #CI_ITERATIONS} by default (the CI run; fewer for slow readers), or {@code -Dfaultbench.fuzz.iterations=N}
- * (the long profile {@code -Pfuzz-long} sets 1,000,000).
+ * <p>Inputs per reader: {@value #CI_ITERATIONS} by default (the CI run; fewer for slow readers), or
+ * {@code -Dfaultbench.fuzz.iterations=N} (the long profile {@code -Pfuzz-long} sets 1,000,000).
  */
 public final class FuzzRun {
     public static final int CI_ITERATIONS = 3000;
@@ -59,8 +59,8 @@ public final class FuzzRun {
 
     /**
      * Runs {@code ciIterations} inputs (fewer for slow readers, to keep CI short), or
-     * {@code faultbench.fuzz.iterations} when set; {@code documented} is the checked exception the reader declares for bad
-     * input. The valid seeds themselves must parse (otherwise the fuzzer would test nothing).
+     * {@code faultbench.fuzz.iterations} when set; {@code documented} is the checked exception the reader declares
+     * for bad input. The valid seeds themselves must parse (otherwise the fuzzer would test nothing).
      */
     public static Outcome run(String reader, int ciIterations, List<byte[]> seeds,
             Class<? extends Exception> documented, Target target) throws InterruptedException {

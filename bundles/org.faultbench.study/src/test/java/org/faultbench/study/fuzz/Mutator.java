@@ -64,7 +64,8 @@ public final class Mutator {
             }
             case 5: { // duplicate a token
                 int[] token = token(text, at);
-                return text.substring(0, token[1]) + " " + text.substring(token[0], token[1]) + text.substring(token[1]);
+                return text.substring(0, token[1]) + " " + text.substring(token[0], token[1])
+                        + text.substring(token[1]);
             }
             case 6: { // delete or duplicate a line
                 int start = text.lastIndexOf('\n', Math.max(0, at - 1)) + 1;
