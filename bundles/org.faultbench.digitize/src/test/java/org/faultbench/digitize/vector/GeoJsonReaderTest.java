@@ -151,4 +151,13 @@ class GeoJsonReaderTest {
             assertEquals(3, e.line(), bad + ": " + e.getMessage());
         }
     }
+
+    @Test
+    void emptyCoordinatesAreAFormatError() {
+        // found by the long fuzz run (seed 20261202, input 492372): VectorFeature threw IllegalArgumentException
+        FormatException e = failure(SAMPLE.replace("\"coordinates\": [[[0, 0], [10, 0]], [[20, 0], [30, 5]]]",
+                "\"coordinates\": []"));
+        assertEquals(6, e.line());
+        assertTrue(e.getMessage().contains("empty"), e.getMessage());
+    }
 }
