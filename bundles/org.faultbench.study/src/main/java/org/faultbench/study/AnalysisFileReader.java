@@ -92,6 +92,7 @@ public final class AnalysisFileReader {
         } catch (JsonParseException e) {
             throw new StudyFormatException(name, "", "is not valid JSON: " + e.getMessage(), e);
         }
+        root = AnalysisFileMigrations.CHAIN.migrate(root, name);
         JsonNode doc = new JsonNode(name, "", root);
         int version = checkHeader(doc);
         Path folder = file.toAbsolutePath().getParent();

@@ -65,6 +65,24 @@ class ReactorArchitectureTest {
     }
 
     @Test
+    void xmlParsersAreCreatedOnlyBySafeXml() throws IOException {
+        List<String> problems = new ArrayList<>();
+        for (Path dir : bundleDirs()) {
+            Path src = dir.resolve("src");
+            if (!Files.isDirectory(src)) {
+                continue;
+            }
+            try (Stream<Path> files = Files.walk(src)) {
+                for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                    problems.addAll(XmlParserRules.violations(ROOT.relativize(f).toString(),
+                            Files.readString(f, StandardCharsets.UTF_8)));
+                }
+            }
+        }
+        assertEquals(List.of(), problems);
+    }
+
+    @Test
     void noEclipseUpdateSiteIsReferenced() throws IOException {
         List<String> offenders = new ArrayList<>();
         try (Stream<Path> files = Files.walk(ROOT)) {

@@ -77,6 +77,8 @@ record EsriAsciiHeader(int ncols, int nrows, double xCentre, double yCentre, dou
                 throw file.error(entries.get("nrows").line(), 2,
                         "a grid of " + ncols + " x " + nrows + " cells is too large");
             }
+            file.requireRoomFor((long) ncols * nrows, dataLine, entries.get("nrows").line(), 2,
+                    "ncols x nrows = " + ncols + " x " + nrows);
             double[] spacing = spacing();
             boolean corner = originIsCorner();
             double x = number(corner ? "xllcorner" : "xllcenter") + (corner ? spacing[0] / 2 : 0);

@@ -62,6 +62,22 @@ final class TextFile {
         return lines.get(number - 1);
     }
 
+    /**
+     * Refuses a header that declares more values than the lines from {@code fromLine} on can hold (every value
+     * takes at least one character and one separator), before an array of that size is allocated: a damaged
+     * count must give a clear error, not exhaust the memory.
+     */
+    void requireRoomFor(long declared, int fromLine, int line, int field, String what) throws FormatException {
+        long room = 0;
+        for (int n = Math.max(1, fromLine); n <= lines.size(); n++) {
+            room += (lines.get(n - 1).length() + 1) / 2;
+        }
+        if (declared > room) {
+            throw error(line, field, what + " declares " + declared + " values, but the rest of the file can hold at"
+                    + " most " + room + "; the header does not match the data");
+        }
+    }
+
     FormatException error(int line, int field, String problem) {
         return new FormatException(name, line, field, problem);
     }

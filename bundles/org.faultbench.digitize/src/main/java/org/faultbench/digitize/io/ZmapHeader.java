@@ -53,6 +53,8 @@ record ZmapHeader(int nodesPerLine, double nullValue, String nullText, int nrows
         if ((long) nrows * ncols > Integer.MAX_VALUE) {
             throw file.error(third.line(), 2, "a grid of " + ncols + " x " + nrows + " nodes is too large");
         }
+        file.requireRoomFor((long) nrows * ncols, lines.get(3).line() + 2, third.line(), 2,
+                "nrows x ncols = " + nrows + " x " + ncols);
         double[] bounds = bounds(file, third);
         return new ZmapHeader(nodesPerLine, nullValue, nullText, nrows, ncols, bounds[0], bounds[1], bounds[2],
                 bounds[3], lines.get(3).line() + 2);

@@ -48,6 +48,30 @@ final class ImageFile implements AutoCloseable {
                 "not a PNG, JPEG, TIFF or BMP image (or the file is damaged)");
     }
 
+    /** Something that reads from an image file through ImageIO. */
+    @FunctionalInterface
+    interface Decoding<T> {
+        T run() throws IOException;
+    }
+
+    /**
+     * Runs {@code decoding}, turning the runtime exceptions that ImageIO's decoders throw on damaged files
+     * (NullPointerException, IllegalArgumentException, ArrayIndexOutOfBoundsException ...) into a
+     * {@link FormatException} naming the file. Cancellation passes through.
+     */
+    static <T> T decoding(Path file, Decoding<T> decoding) throws IOException {
+        try {
+            return decoding.run();
+        } catch (java.util.concurrent.CancellationException cancelled) {
+            throw cancelled;
+        } catch (RuntimeException damaged) {
+            FormatException e = new FormatException(String.valueOf(file.getFileName()), 0, 0,
+                    "the image is damaged and cannot be decoded (" + damaged + ")");
+            e.initCause(damaged);
+            throw e;
+        }
+    }
+
     ImageReader reader() {
         return reader;
     }

@@ -36,6 +36,11 @@ public final class ImagePyramid {
         Objects.requireNonNull(store, "store");
         Objects.requireNonNull(progress, "progress");
         PyramidLayout layout = new PyramidLayout(source.width(), source.height(), settings.tileSize());
+        return ImageFile.decoding(source.file(), () -> build(source, settings, store, progress, layout));
+    }
+
+    private static ImagePyramid build(RasterSource source, PyramidSettings settings, TileStore store,
+            BuildProgress progress, PyramidLayout layout) throws IOException {
         try (ImageFile image = ImageFile.open(source.file(), false)) {
             int width = image.reader().getWidth(0);
             int height = image.reader().getHeight(0);

@@ -42,6 +42,10 @@ public record RasterSource(Path file, RasterFormat format, int width, int height
 
     /** Reads the image header and any georeference without decoding pixels. */
     public static RasterSource open(Path file) throws IOException {
+        return ImageFile.decoding(file, () -> openChecked(file));
+    }
+
+    private static RasterSource openChecked(Path file) throws IOException {
         try (ImageFile image = ImageFile.open(file, true)) {
             int width = image.reader().getWidth(0);
             int height = image.reader().getHeight(0);

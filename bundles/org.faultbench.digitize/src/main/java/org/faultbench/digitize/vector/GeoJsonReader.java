@@ -88,8 +88,15 @@ public final class GeoJsonReader {
             throw JsonNode.error(fileName, geometry, "feature without geometry; only lines and polygons are read");
         }
         JsonNode properties = members.get("properties");
-        return new VectorFeature(geometry(fileName, geometry),
-                properties == null || properties.value() == null ? Map.of() : properties(fileName, properties));
+        Geometry shape = geometry(fileName, geometry);
+        Map<String, Object> values = properties == null || properties.value() == null ? Map.of()
+                : properties(fileName, properties);
+        try {
+            return new VectorFeature(shape, values);
+        } catch (IllegalArgumentException refused) {
+            // e.g. "coordinates": [] gives an empty geometry, which a feature may not have
+            throw JsonNode.error(fileName, geometry, refused.getMessage());
+        }
     }
 
     private Geometry geometry(String fileName, JsonNode node) throws FormatException {

@@ -14,6 +14,7 @@ import java.util.Map;
 
 import org.faultbench.digitize.io.FileUnits;
 import org.faultbench.digitize.io.FormatException;
+import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Geometry;
 import org.locationtech.jts.io.ParseException;
 import org.locationtech.jts.io.WKTReader;
@@ -64,6 +65,12 @@ public final class WktReader {
             String[] fields = text.split(SEPARATOR, -1);
             if (names == null && features.isEmpty() && fields[0].strip().equalsIgnoreCase(HEADER)) {
                 names = List.of(fields).subList(1, fields.length).stream().map(String::strip).toList();
+                for (int a = 0; a < names.size(); a++) {
+                    if (names.get(a).isEmpty() || names.indexOf(names.get(a)) < a) {
+                        throw new FormatException(fileName, n, a + 2, names.get(a).isEmpty()
+                                ? "the attribute name is empty" : "attribute '" + names.get(a) + "' appears twice");
+                    }
+                }
                 continue;
             }
             List<String> attributeNames = names == null ? List.of() : names;
@@ -78,7 +85,11 @@ public final class WktReader {
             for (int a = 0; a < attributeNames.size(); a++) {
                 properties.put(attributeNames.get(a), fields[a + 1]);
             }
-            features.add(new VectorFeature(geometry, properties));
+            try {
+                features.add(new VectorFeature(geometry, properties));
+            } catch (IllegalArgumentException bad) {
+                throw new FormatException(fileName, n, 1, bad.getMessage());
+            }
         }
         return List.copyOf(features);
     }
@@ -97,6 +108,15 @@ public final class WktReader {
             geometry = parser.read(field);
         } catch (ParseException bad) {
             throw new FormatException(fileName, line, 1, withColumn(field, bad.getMessage()));
+        } catch (IllegalArgumentException bad) {
+            // JTS refuses well-formed text that is no valid geometry, e.g. a polygon ring that does not close
+            throw new FormatException(fileName, line, 1, "not a valid geometry (" + bad.getMessage() + ")");
+        }
+        for (Coordinate c : geometry.getCoordinates()) {
+            if (!Double.isFinite(c.x) || !Double.isFinite(c.y) || Double.isInfinite(c.getZ())) {
+                throw new FormatException(fileName, line, 1, "coordinates must be finite numbers, found ("
+                        + c.x + " " + c.y + (Double.isNaN(c.getZ()) ? "" : " " + c.getZ()) + ")");
+            }
         }
         if (!FeatureGeometry.SUPPORTED.contains(geometry.getGeometryType())) {
             throw new FormatException(fileName, line, 1, FeatureGeometry.unsupported(geometry.getGeometryType()));

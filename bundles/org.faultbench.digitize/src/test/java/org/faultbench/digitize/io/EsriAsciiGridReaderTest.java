@@ -176,4 +176,12 @@ class EsriAsciiGridReaderTest {
         assertEquals(0, e.line());
         assertTrue(e.getMessage().startsWith("sample.asc: "), e.getMessage());
     }
+
+    @Test
+    void declaredSizeBeyondTheFileIsRefusedBeforeAllocating() {
+        // the ZMAP+ reader ran out of memory on such a header (fuzz test); the ESRI header is guarded the same way
+        FormatException e = failure(SAMPLE.replace("nrows         3", "nrows         400000000"));
+        assertEquals(2, e.line());
+        assertTrue(e.getMessage().contains("can hold at most"), e.getMessage());
+    }
 }

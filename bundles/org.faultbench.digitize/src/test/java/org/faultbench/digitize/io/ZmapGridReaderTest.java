@@ -177,4 +177,12 @@ class ZmapGridReaderTest {
         FormatException e = failure("grid exported today\n" + SAMPLE);
         assertEquals(1, e.line());
     }
+
+    @Test
+    void declaredSizeBeyondTheFileIsRefusedBeforeAllocating() {
+        // found by TextReadersFuzzTest (seed 20261202, input 8025): ncols 429496729 ran out of memory
+        FormatException e = failure(SAMPLE.replace("      3,        4,", "      3,  429496729,"));
+        assertEquals(5, e.line());
+        assertTrue(e.getMessage().contains("can hold at most"), e.getMessage());
+    }
 }

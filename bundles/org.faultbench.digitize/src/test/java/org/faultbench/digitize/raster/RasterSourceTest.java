@@ -96,4 +96,16 @@ class RasterSourceTest {
         assertThrows(IllegalArgumentException.class, () -> new RasterSource(file, RasterFormat.PNG, 0, 1,
                 Optional.empty(), GeoreferenceOrigin.NONE));
     }
+
+    @Test
+    void damagedTiffIsAFormatErrorNotARuntimeException() throws IOException {
+        // found by ImageReaderFuzzTest (seed 20261202, input 463): the JDK's TIFF reader threw NullPointerException
+        // on an IFD entry whose count runs past the end of the file
+        byte[] tiff = {'M', 'M', 0, 42, 0, 0, 0, 8, 0, 12, 1, 0, 0, 3, 0, 0, 0, 1, 0, 24, 0, 0, 1, 1, 0, 3, 0, 0, 0,
+            1, 0, 16, 0, 0, 1, 2, 0, 3, 0, 0, 0, 3, 0, 0, 0, (byte) 0xa0, 1, 3, 0, 3, 0, 0, 0, 1, 0, 1, 0, 0, 1, 6, 0,
+            3, 0, 0, 0, 1, 0, 2, 0, 0, 1, 0x11, 0, 4, 0, 0, 0, 1};
+        Path file = Files.write(dir.resolve("damaged.tif"), tiff);
+        FormatException e = assertThrows(FormatException.class, () -> RasterSource.open(file));
+        assertTrue(e.getMessage().startsWith("damaged.tif: "), e.getMessage());
+    }
 }

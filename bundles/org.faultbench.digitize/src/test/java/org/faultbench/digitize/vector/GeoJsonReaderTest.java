@@ -142,4 +142,22 @@ class GeoJsonReaderTest {
         FormatException wrongType = failure("{\"type\": \"Topology\"}");
         assertTrue(wrongType.getMessage().contains("found type 'Topology'"), wrongType.getMessage());
     }
+
+    @Test
+    void nonFiniteCoordinatesAreRefused() {
+        // NaN and infinity audit (issue #9): an overflowing literal and NaN must not become coordinates
+        for (String bad : new String[] {"1e400", "NaN", "-Infinity"}) {
+            FormatException e = failure(SAMPLE.replace("[1500.5, 2600, 1810]", "[1500.5, " + bad + ", 1810]"));
+            assertEquals(3, e.line(), bad + ": " + e.getMessage());
+        }
+    }
+
+    @Test
+    void emptyCoordinatesAreAFormatError() {
+        // found by the long fuzz run (seed 20261202, input 492372): VectorFeature threw IllegalArgumentException
+        FormatException e = failure(SAMPLE.replace("\"coordinates\": [[[0, 0], [10, 0]], [[20, 0], [30, 5]]]",
+                "\"coordinates\": []"));
+        assertEquals(6, e.line());
+        assertTrue(e.getMessage().contains("empty"), e.getMessage());
+    }
 }

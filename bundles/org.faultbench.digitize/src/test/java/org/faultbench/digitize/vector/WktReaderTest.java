@@ -104,4 +104,27 @@ class WktReaderTest {
         FormatException open = failure("LINESTRING (0 0, 1 1\n");
         assertEquals(1, open.line());
     }
+
+    @Test
+    void ringThatDoesNotCloseIsAFormatError() {
+        // found by VectorReadersFuzzTest (seed 20261202, input 34): JTS threw IllegalArgumentException
+        FormatException e = failure("POLYGON ((0 0, 100 0, 100 100, 0 100, 0 -1))\n");
+        assertEquals(1, e.line());
+        assertTrue(e.getMessage().contains("not a valid geometry"), e.getMessage());
+    }
+
+    @Test
+    void nonFiniteCoordinatesAreRefused() {
+        FormatException e = failure("LINESTRING (0 0, 1 1)\nLINESTRING (0 NaN, 1 1)\n");
+        assertEquals(2, e.line());
+        assertTrue(e.getMessage().contains("finite"), e.getMessage());
+    }
+
+    @Test
+    void emptyAttributeNameIsAFormatError() {
+        // found by VectorReadersFuzzTest (seed 20261202, input 48): VectorFeature threw IllegalArgumentException
+        FormatException e = failure("WKT\t\tkind\nLINESTRING (0 0, 1 1)\tF1\ttrace\n");
+        assertEquals(1, e.line());
+        assertEquals(2, e.field());
+    }
 }
