@@ -1,13 +1,12 @@
 package org.faultbench.app;
 
 import java.io.IOException;
-import java.io.Reader;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
-import java.util.Properties;
 import java.util.stream.Stream;
 
+import org.eclipse.core.runtime.ILog;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Platform;
@@ -16,6 +15,8 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.faultbench.study.ActiveStudy;
 import org.faultbench.study.AnalysisFileReader;
 import org.faultbench.study.StudyFormatException;
+import org.faultbench.study.store.OpenedProject;
+import org.faultbench.study.store.ProjectStore;
 
 /** Reads an analysis file in the background and makes it the active study. */
 public final class StudyLoadJob extends Job {
@@ -38,15 +39,16 @@ public final class StudyLoadJob extends Job {
     }
 
     /**
-     * The study to open at start-up: the one named by {@code study=} in the workspace's {@code workspace.properties},
-     * else the first analysis file (by name) in its {@code studies} folder.
+     * The study to open at start-up: the active study of the workspace's project file (a project file damaged by a
+     * crash is restored from its backup, and the repair is logged), else the first analysis file (by name) in its
+     * {@code studies} folder.
      */
     static Optional<Path> firstWorkspaceStudy() {
         if (Platform.getInstanceLocation() == null || Platform.getInstanceLocation().getURL() == null) {
             return Optional.empty();
         }
         Path workspace = Path.of(Platform.getInstanceLocation().getURL().getPath());
-        Optional<Path> named = namedStudy(workspace);
+        Optional<Path> named = activeStudy(workspace);
         if (named.isPresent()) {
             return named;
         }
@@ -61,18 +63,19 @@ public final class StudyLoadJob extends Job {
         }
     }
 
-    private static Optional<Path> namedStudy(Path workspace) {
-        Path settings = workspace.resolve("workspace.properties");
-        if (!Files.isRegularFile(settings)) {
+    private static Optional<Path> activeStudy(Path workspace) {
+        if (!Files.exists(ProjectStore.projectFile(workspace)) && !Files.exists(workspace.resolve("workspace.properties"))) {
             return Optional.empty();
         }
-        Properties properties = new Properties();
-        try (Reader in = Files.newBufferedReader(settings)) {
-            properties.load(in);
-        } catch (IOException e) {
+        try {
+            OpenedProject opened = new ProjectStore().open(workspace);
+            if (opened.report().recovered()) {
+                ILog.of(StudyLoadJob.class).warn(opened.report().summary());
+            }
+            return opened.project().activeStudy().map(workspace::resolve);
+        } catch (StudyFormatException e) {
+            ILog.of(StudyLoadJob.class).error(e.getMessage(), e);
             return Optional.empty();
         }
-        String study = properties.getProperty("study");
-        return study == null ? Optional.empty() : Optional.of(workspace.resolve(study.trim()));
     }
 }

@@ -1,13 +1,10 @@
 package org.faultbench.faults.ui;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CopyOnWriteArrayList;
-import java.util.stream.Stream;
 
 import org.faultbench.faults.qc.QcFinding;
 import org.faultbench.faults.qc.QcRuleContributions;
@@ -15,10 +12,12 @@ import org.faultbench.faults.repair.FaultModel;
 import org.faultbench.study.AnalysisFile;
 import org.faultbench.study.FaultModelLoader;
 import org.faultbench.study.StudyFormatException;
+import org.faultbench.study.WorkspaceLocator;
+import org.faultbench.study.store.ProjectStore;
 
 /**
  * The fault model under review and its QC findings, shared by the throw-profile and displacement-length views.
- * Built from the active study's workspace: every fault trace in its {@code faults/*.geojson} files, with cut-offs
+ * Built from the active study's workspace: the fault traces of the first fault file its project lists, with cut-offs
  * sampled from the study's reference horizon grid. Model work only; views listen and redraw on their own thread.
  */
 final class FaultReview {
@@ -66,22 +65,15 @@ final class FaultReview {
         listeners.forEach(Listener::changed);
     }
 
-    /** The first fault file of the workspace the study belongs to (the study's folder or its parent). */
-    static Path faultsFile(Path studyFile) throws IOException {
-        Path folder = studyFile.toAbsolutePath().getParent();
-        List<Path> candidates = new ArrayList<>();
-        for (Path root : new Path[] { folder, folder.getParent() }) {
-            Path faults = root == null ? null : root.resolve("faults");
-            if (faults != null && Files.isDirectory(faults)) {
-                try (Stream<Path> files = Files.list(faults)) {
-                    files.filter(p -> p.toString().endsWith(".geojson")).sorted().forEach(candidates::add);
-                }
-            }
+    /** The first fault file the study's workspace lists in its project file. */
+    static Path faultsFile(Path studyFile) throws IOException, StudyFormatException {
+        Path workspace = WorkspaceLocator.workspaceOf(studyFile)
+                .orElseThrow(() -> new IOException("no Faultbench workspace (faultbench-project.json) holds " + studyFile));
+        List<String> faults = new ProjectStore().open(workspace).project().faults();
+        if (faults.isEmpty()) {
+            throw new IOException("the project " + ProjectStore.projectFile(workspace) + " lists no fault files");
         }
-        if (candidates.isEmpty()) {
-            throw new IOException("no faults/*.geojson beside " + studyFile);
-        }
-        return candidates.get(0);
+        return workspace.resolve(faults.get(0));
     }
 
     void addListener(Listener listener) {
