@@ -10,6 +10,7 @@ import java.util.OptionalLong;
 import org.faultbench.report.ReportFiles;
 import org.faultbench.report.ReportInput;
 import org.faultbench.sim.MonteCarloSimulator;
+import org.faultbench.sim.ResultOutputContributions;
 import org.faultbench.sim.SimulationResult;
 import org.faultbench.sim.SimulationSettings;
 import org.faultbench.study.AnalysisFile;
@@ -22,6 +23,8 @@ import org.faultbench.study.StudyFormatException;
  * analysis file, runs the Monte Carlo trap analysis and writes results.json, summary.csv and the leak-probability
  * tables to DIR, then report.html and report.pdf unless --no-report. Options left out take the analysis file's own
  * values. The report is rendered before anything is written, so a report that cannot be made leaves DIR untouched.
+ * Then the contributed result outputs (extension point {@value ResultOutputContributions#POINT}) run; one that fails
+ * is a warning on the console, never a failed run (results.json is already written).
  */
 record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong seed, int threads, Path outDir,
         boolean report) implements BatchCommand {
@@ -123,6 +126,9 @@ record AnalyzeCommand(Path analysisFile, OptionalInt realisations, OptionalLong 
         } catch (IOException e) {
             context.err().println("faultbench: cannot write results to " + outDir + ": " + e.getMessage());
             return ExitCode.FAILED;
+        }
+        for (String failure : ResultOutputContributions.writeAll(context.resultOutputs().get(), result, outDir)) {
+            context.err().println("faultbench: warning: " + failure);
         }
         new ResultTable(context.out()).print(result);
         context.out().println("Results written to " + outDir.toAbsolutePath());

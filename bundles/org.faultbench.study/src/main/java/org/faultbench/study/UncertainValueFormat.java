@@ -1,6 +1,9 @@
 package org.faultbench.study;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
@@ -13,6 +16,8 @@ import org.faultbench.core.uncertain.NormalValue;
 import org.faultbench.core.uncertain.TriangularValue;
 import org.faultbench.core.uncertain.UncertainValue;
 import org.faultbench.core.uncertain.UniformValue;
+import org.faultbench.strat.distribution.DistributionContributions;
+import org.faultbench.strat.distribution.DistributionType;
 
 /**
  * Reads an uncertain input: a plain number (a fixed value) or an object with exactly one distribution key:
@@ -23,7 +28,10 @@ import org.faultbench.core.uncertain.UniformValue;
  * {"uniform": {"min": 20, "max": 40}}
  * {"triangular": {"min": 20, "mode": 30, "max": 45}}
  * {"lognormal": {"median": 100, "sigmaLn": 0.5}}
+ * {"p90p10Lognormal": {"p90": 50, "p10": 190}}
  * </pre>
+ * The last form is any parameterisation of extension point {@value DistributionContributions#POINT}; it is read into
+ * the kind it builds, so a saved file holds that kind (e.g. the lognormal's median and sigmaLn).
  */
 final class UncertainValueFormat {
     static final List<String> KINDS = List.of("normal", "truncatedNormal", "uniform", "triangular", "lognormal");
@@ -37,8 +45,15 @@ final class UncertainValueFormat {
             return wrap(node, () -> UncertainValue.fixed(value));
         }
         List<String> keys = node.keys();
+        Optional<DistributionType> contributed = keys.size() == 1 && !KINDS.contains(keys.get(0))
+                ? DistributionContributions.platformCatalog().find(keys.get(0)) : Optional.empty();
+        if (contributed.isPresent()) {
+            return readContributed(node.field(keys.get(0)), contributed.get());
+        }
         if (keys.size() != 1 || !KINDS.contains(keys.get(0))) {
-            throw node.error("expected a number or one of " + KINDS + " with its parameters, found " + node.element());
+            throw node.error("expected a number or one of " + KINDS + " or "
+                    + DistributionContributions.platformCatalog().ids() + " with its parameters, found "
+                    + node.element());
         }
         String kind = keys.get(0);
         JsonNode p = node.field(kind);
@@ -67,6 +82,19 @@ final class UncertainValueFormat {
             double sigma = p.field("sigmaLn").number();
             return wrap(p, () -> UncertainValue.logNormal(median, sigma));
         }
+    }
+
+    private static UncertainValue readContributed(JsonNode p, DistributionType type) throws StudyFormatException {
+        for (String key : p.keys()) {
+            if (!type.parameterNames().contains(key)) {
+                throw p.error("unknown parameter '" + key + "' of " + type.id() + "; expected " + type.parameterNames());
+            }
+        }
+        Map<String, Double> parameters = new LinkedHashMap<>();
+        for (String name : type.parameterNames()) {
+            parameters.put(name, p.field(name).number());
+        }
+        return wrap(p, () -> type.create(parameters));
     }
 
     /**

@@ -19,10 +19,11 @@ final class ControlPointLayout {
     }
 
     /**
-     * Checks the enabled points: at least the minimum number, not all at one place, and (for every kind but the
-     * similarity, which fixes only a scale and an angle) not all on one line, in the image or on the map.
+     * Checks the enabled points: at least the minimum number, not all at one place, and (for every type needing three
+     * or more points; not the similarity, which fixes only a scale and an angle) not all on one line, in the image or
+     * on the map.
      */
-    static void check(TransformKind kind, List<ControlPoint> enabled) {
+    static void check(TransformType kind, List<ControlPoint> enabled) {
         if (enabled.size() < kind.minimumPoints()) {
             throw FitErrors.tooFew(kind, enabled.size());
         }
@@ -32,12 +33,12 @@ final class ControlPointLayout {
                 "map position", "on the map");
     }
 
-    private static void checkSide(TransformKind kind, int count, List<double[]> points, String place, String where) {
+    private static void checkSide(TransformType kind, int count, List<double[]> points, String place, String where) {
         PointNormalization normalization = PointNormalization.of(points);
         if (normalization.coincident()) {
             throw FitErrors.degenerate(kind, count, "they all sit at one " + place);
         }
-        if (kind != TransformKind.SIMILARITY && onOneLine(points, normalization)) {
+        if (kind.refusesCollinearPoints() && onOneLine(points, normalization)) {
             throw FitErrors.degenerate(kind, count, "they lie on one line " + where);
         }
     }

@@ -12,8 +12,9 @@ import java.util.Objects;
  *
  * @param transform the fitted transform
  * @param residuals one per enabled control point, in input order
+ * @param type the type the transform was fitted as (its name and minimum number of points go into the warnings)
  */
-public record FitReport(GeoTransform transform, List<PointResidual> residuals) {
+public record FitReport(GeoTransform transform, List<PointResidual> residuals, TransformType type) {
 
     /** A point is suspect when its residual is more than this many times the RMS (common practice). */
     public static final double OUTLIER_FACTOR = 3;
@@ -24,6 +25,12 @@ public record FitReport(GeoTransform transform, List<PointResidual> residuals) {
         if (residuals.isEmpty()) {
             throw new IllegalArgumentException("a fit report needs at least one control point residual");
         }
+        Objects.requireNonNull(type, "type");
+    }
+
+    /** A report on a transform of a built-in kind. */
+    public FitReport(GeoTransform transform, List<PointResidual> residuals) {
+        this(transform, residuals, TransformType.of(Objects.requireNonNull(transform, "transform").kind()));
     }
 
     /** Root-mean-square residual √(Σ(dx² + dy²) / N) in map units. */
@@ -61,9 +68,8 @@ public record FitReport(GeoTransform transform, List<PointResidual> residuals) {
             throw new IllegalArgumentException("RMS tolerance must be a finite number >= 0, was " + rmsTolerance);
         }
         List<String> warnings = new ArrayList<>();
-        TransformKind kind = transform.kind();
-        if (residuals.size() == kind.minimumPoints()) {
-            warnings.add(residuals.size() + " control points is the minimum for " + FitErrors.named(kind)
+        if (residuals.size() == type.minimumPoints()) {
+            warnings.add(residuals.size() + " control points is the minimum for " + FitErrors.named(type)
                     + ": the fit is exact and cannot reveal a misplaced point; add control points");
         }
         double rms = rms();

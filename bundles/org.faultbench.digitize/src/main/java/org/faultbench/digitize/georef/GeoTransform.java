@@ -23,9 +23,20 @@ public interface GeoTransform {
      */
     double[] toPixel(double x, double y);
 
-    /** Which kind of transform this is. */
-    TransformKind kind();
+    /**
+     * Which built-in kind of transform this is. Transforms of a contributed type (extension point
+     * {@value TransformContributions#POINT}) have none and need not implement it; {@link FitReport#type()} names the
+     * type of any fitted transform.
+     *
+     * @throws UnsupportedOperationException for a transform of a contributed type
+     */
+    default TransformKind kind() {
+        throw new UnsupportedOperationException(getClass().getName() + " is a contributed transform type, not a "
+                + "built-in kind");
+    }
 
     /** The equivalent world file; present only for transforms a world file can hold (similarity and affine). */
-    Optional<WorldFile> asWorldFile();
+    default Optional<WorldFile> asWorldFile() {
+        return Optional.empty();
+    }
 }

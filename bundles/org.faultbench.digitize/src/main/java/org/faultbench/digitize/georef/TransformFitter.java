@@ -24,15 +24,27 @@ public final class TransformFitter {
      */
     public static FitReport fit(TransformKind kind, List<ControlPoint> points) {
         Objects.requireNonNull(kind, "kind");
+        return fit(TransformType.of(kind), points);
+    }
+
+    /**
+     * Fits a transform of any type, built-in ({@link TransformType#of}) or contributed
+     * ({@link TransformCatalog#find}), to the enabled points.
+     *
+     * @throws IllegalArgumentException as {@link #fit(TransformKind, List)}, or when the type's estimator refuses the
+     *         points
+     */
+    public static FitReport fit(TransformType type, List<ControlPoint> points) {
+        Objects.requireNonNull(type, "type");
         List<ControlPoint> enabled = enabledWithUniqueIds(points);
-        GeoTransform transform = estimate(kind, enabled);
-        boolean leaveOneOut = enabled.size() > kind.minimumPoints();
+        GeoTransform transform = estimate(type, enabled);
+        boolean leaveOneOut = enabled.size() > type.minimumPoints();
         List<PointResidual> residuals = new ArrayList<>();
         for (ControlPoint point : enabled) {
-            OptionalDouble loo = leaveOneOut ? leaveOneOutResidual(kind, enabled, point) : OptionalDouble.empty();
+            OptionalDouble loo = leaveOneOut ? leaveOneOutResidual(type, enabled, point) : OptionalDouble.empty();
             residuals.add(residual(transform, point, loo));
         }
-        return new FitReport(transform, residuals);
+        return new FitReport(transform, residuals, type);
     }
 
     private static List<ControlPoint> enabledWithUniqueIds(List<ControlPoint> points) {
@@ -46,18 +58,18 @@ public final class TransformFitter {
         return points.stream().filter(ControlPoint::enabled).toList();
     }
 
-    private static GeoTransform estimate(TransformKind kind, List<ControlPoint> enabled) {
-        ControlPointLayout.check(kind, enabled);
-        return switch (kind) {
-            case SIMILARITY -> SimilarityEstimator.estimate(enabled);
-            case AFFINE -> AffineEstimator.estimate(enabled);
-            case POLYNOMIAL_2 -> Polynomial2Estimator.estimate(enabled);
-            case PROJECTIVE -> ProjectiveEstimator.estimate(enabled);
-        };
+    private static GeoTransform estimate(TransformType type, List<ControlPoint> enabled) {
+        ControlPointLayout.check(type, enabled);
+        GeoTransform transform = type.estimator().estimate(enabled);
+        if (transform == null) {
+            throw new IllegalArgumentException("the " + type.name() + " transform (" + type.id()
+                    + ") returned no fit");
+        }
+        return transform;
     }
 
     /** Refits without the point and measures how far the refit misses it; empty if the others cannot fix a fit. */
-    private static OptionalDouble leaveOneOutResidual(TransformKind kind, List<ControlPoint> enabled,
+    private static OptionalDouble leaveOneOutResidual(TransformType kind, List<ControlPoint> enabled,
             ControlPoint left) {
         List<ControlPoint> others = enabled.stream().filter(p -> p != left).toList();
         try {

@@ -13,20 +13,21 @@ import org.eclipse.swt.graphics.RGB;
 import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Canvas;
 import org.eclipse.swt.widgets.Composite;
-import org.faultbench.juxtaposition.JuxtapositionClass;
+import org.faultbench.juxtaposition.paint.AttributePainter;
+import org.faultbench.juxtaposition.paint.BuiltInPainters;
+import org.faultbench.juxtaposition.paint.LegendEntry;
+import org.faultbench.juxtaposition.paint.Overlay;
+import org.faultbench.juxtaposition.paint.OverlayMark;
+import org.faultbench.juxtaposition.paint.Rgb;
 import org.faultbench.ui.NumberText;
 
 /**
- * Draws an {@link AllanPicture}: juxtaposition classes as colours, footwall unit tops as solid lines and hanging-wall
- * tops as dashed lines, leak probability blended in violet, horizontal depth lines (contacts, drainage depth), axes and
- * a legend. Our own palette: reservoir against reservoir in burnt orange, reservoir against seal in pale sand, seal
- * against seal in grey-green.
+ * Draws an {@link AllanPicture}: cells coloured by the chosen {@link AttributePainter} (a built-in or a contributed
+ * one), footwall unit tops as solid lines and hanging-wall tops as dashed lines, horizontal depth lines (contacts,
+ * drainage depth), the marks of the chosen overlays, axes and the painter's legend. Painters give 0xRRGGBB integers;
+ * this class only turns them into SWT colours.
  */
 final class AllanCanvas extends Canvas {
-    static final RGB RESERVOIR_RESERVOIR = new RGB(217, 95, 2);
-    static final RGB RESERVOIR_SEAL = new RGB(240, 225, 175);
-    static final RGB SEAL_SEAL = new RGB(170, 180, 165);
-    static final RGB LEAK = new RGB(117, 52, 160);
     private static final int LEFT = 70;
     private static final int TOP = 10;
     private static final int BOTTOM = 70;
@@ -36,19 +37,9 @@ final class AllanCanvas extends Canvas {
     record DepthLine(String label, double z, RGB colour, int style) {
     }
 
-    /** What the cells are coloured by. */
-    enum Paint {
-        JUXTAPOSITION("juxtaposition"), SEAL_ATTRIBUTE("seal attribute"), LEAK_PROBABILITY("leak probability");
-
-        final String label;
-
-        Paint(String label) {
-            this.label = label;
-        }
-    }
-
     private AllanPicture picture;
-    private Paint paintMode = Paint.JUXTAPOSITION;
+    private AttributePainter painter = new BuiltInPainters.Juxtaposition();
+    private List<Overlay> overlays = List.of();
     private Image image;
     private final List<DepthLine> lines = new ArrayList<>();
 
@@ -66,10 +57,32 @@ final class AllanCanvas extends Canvas {
         redraw();
     }
 
-    void paintBy(Paint mode) {
-        paintMode = mode;
+    void paintBy(AttributePainter newPainter) {
+        painter = newPainter;
         disposeImage();
         redraw();
+    }
+
+    void overlay(List<Overlay> chosen) {
+        overlays = List.copyOf(chosen);
+        redraw();
+    }
+
+    /** The overlays' marks as depth lines and labels; an overlay that fails is left out, the diagram still draws. */
+    private List<OverlayMark> overlayMarks() {
+        List<OverlayMark> marks = new ArrayList<>();
+        for (Overlay overlay : overlays) {
+            try {
+                marks.addAll(overlay.marks(picture.overlayScene()));
+            } catch (RuntimeException | LinkageError e) {
+                org.eclipse.core.runtime.ILog.of(AllanCanvas.class).warn("overlay '" + overlay.id() + "' failed", e);
+            }
+        }
+        return marks;
+    }
+
+    static RGB rgb(int packed) {
+        return new RGB(Rgb.red(packed), Rgb.green(packed), Rgb.blue(packed));
     }
 
     AllanPicture picture() {
@@ -114,48 +127,33 @@ final class AllanCanvas extends Canvas {
         gc.drawImage(image, 0, 0, b.width, b.height, p.x, p.y, p.width, p.height);
         drawUnitTops(gc, p);
         drawDepthLines(gc, p);
+        drawOverlayLabels(gc, p);
         drawAxes(gc, p);
         drawLegend(gc, p);
     }
 
-    /** One pixel per raster cell, coloured by juxtaposition class and blended with leak probability. */
+    /** One pixel per raster cell, coloured by the painter; a painter that fails leaves its cells white. */
     private ImageData cellImage() {
         var raster = picture.raster;
+        var scene = picture.paintScene();
         ImageData data = new ImageData(raster.columnCount(), raster.rowCount(), 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
+        boolean failed = false;
         for (int k = 0; k < raster.columnCount(); k++) {
             for (int row = 0; row < raster.rowCount(); row++) {
-                RGB colour = new RGB(255, 255, 255);
-                if (raster.hasData(k, row)) {
-                    colour = cellColour(k, row);
+                int colour = Rgb.WHITE;
+                if (raster.hasData(k, row) && !failed) {
+                    try {
+                        colour = painter.rgb(picture.cell(k, row), scene) & 0xFFFFFF;
+                    } catch (RuntimeException | LinkageError e) {
+                        failed = true;
+                        org.eclipse.core.runtime.ILog.of(AllanCanvas.class).warn("attribute painter '" + painter.id()
+                                + "' failed", e);
+                    }
                 }
-                data.setPixel(k, row, data.palette.getPixel(colour));
+                data.setPixel(k, row, data.palette.getPixel(rgb(colour)));
             }
         }
         return data;
-    }
-
-    private RGB cellColour(int k, int row) {
-        var raster = picture.raster;
-        JuxtapositionClass c = raster.juxtapositionClass(k, row);
-        RGB juxtaposition = c == JuxtapositionClass.RESERVOIR_RESERVOIR ? RESERVOIR_RESERVOIR
-                : c == JuxtapositionClass.RESERVOIR_SEAL ? RESERVOIR_SEAL : SEAL_SEAL;
-        double p = picture.leakProbability(k, raster.rowDepth(row));
-        switch (paintMode) {
-        case SEAL_ATTRIBUTE:
-            double value = picture.attributeAt(k, row);
-            // a clay-fraction attribute in % on a white-to-slate ramp; cells without fault rock keep their class
-            return Double.isNaN(value) ? blend(juxtaposition, new RGB(255, 255, 255), 0.6)
-                    : blend(new RGB(250, 250, 240), new RGB(40, 60, 90), Math.max(0, Math.min(1, value / 60)));
-        case LEAK_PROBABILITY:
-            return blend(blend(juxtaposition, new RGB(255, 255, 255), 0.7), LEAK, p);
-        default:
-            return blend(juxtaposition, LEAK, 0.85 * p);
-        }
-    }
-
-    static RGB blend(RGB a, RGB b, double t) {
-        return new RGB((int) Math.round(a.red + t * (b.red - a.red)), (int) Math.round(a.green + t * (b.green - a.green)),
-                (int) Math.round(a.blue + t * (b.blue - a.blue)));
     }
 
     private int x(Rectangle p, double u) {
@@ -196,7 +194,14 @@ final class AllanCanvas extends Canvas {
     private void drawDepthLines(GC gc, Rectangle p) {
         gc.setLineWidth(2);
         int labelled = 0;
-        for (DepthLine line : lines) {
+        List<DepthLine> all = new ArrayList<>(lines);
+        for (OverlayMark mark : overlayMarks()) {
+            if (mark.isDepthLine()) {
+                all.add(new DepthLine(mark.text(), mark.z(), rgb(mark.rgb()),
+                        mark.dashed() ? SWT.LINE_DASH : SWT.LINE_SOLID));
+            }
+        }
+        for (DepthLine line : all) {
             if (!Double.isFinite(line.z()) || line.z() < picture.zTop() || line.z() > picture.zBase()) {
                 continue;
             }
@@ -214,6 +219,18 @@ final class AllanCanvas extends Canvas {
         }
         gc.setLineWidth(1);
         gc.setLineStyle(SWT.LINE_SOLID);
+    }
+
+    private void drawOverlayLabels(GC gc, Rectangle p) {
+        for (OverlayMark mark : overlayMarks()) {
+            if (!mark.isDepthLine() && mark.z() >= picture.zTop() && mark.z() <= picture.zBase()
+                    && mark.u() >= picture.uMin() && mark.u() <= picture.uMax()) {
+                Color c = new Color(rgb(mark.rgb()));
+                gc.setForeground(c);
+                gc.drawText(mark.text(), x(p, mark.u()), y(p, mark.z()), true);
+            }
+        }
+        gc.setForeground(getDisplay().getSystemColor(SWT.COLOR_BLACK));
     }
 
     private void drawAxes(GC gc, Rectangle p) {
@@ -239,12 +256,14 @@ final class AllanCanvas extends Canvas {
     private void drawLegend(GC gc, Rectangle p) {
         int y = p.y + p.height + 42;
         int x = p.x;
-        x = swatch(gc, x, y, RESERVOIR_RESERVOIR, "reservoir/reservoir window");
-        x = swatch(gc, x, y, RESERVOIR_SEAL, "reservoir/seal");
-        x = swatch(gc, x, y, SEAL_SEAL, "seal/seal");
-        x = swatch(gc, x, y, LEAK, picture.leak == null ? "leak probability (after a run)" : "leak probability (0\u2013100 %)");
-        if (paintMode == Paint.SEAL_ATTRIBUTE && picture.sealAttribute != null) {
-            swatch(gc, x, y, new RGB(40, 60, 90), picture.sealAttribute + " 0 (pale) \u2013 60+ (slate)");
+        List<LegendEntry> legend;
+        try {
+            legend = painter.legend(picture.paintScene());
+        } catch (RuntimeException | LinkageError e) {
+            legend = List.of(new LegendEntry(Rgb.WHITE, painter.name() + ": no legend (painter failed)"));
+        }
+        for (LegendEntry entry : legend) {
+            x = swatch(gc, x, y, rgb(entry.rgb()), entry.label());
         }
     }
 

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.eclipse.jface.action.Action;
+import org.eclipse.jface.action.IAction;
+import org.eclipse.jface.action.IMenuManager;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
@@ -17,6 +19,10 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.ui.part.ViewPart;
+import org.faultbench.juxtaposition.paint.AttributePainter;
+import org.faultbench.juxtaposition.paint.AttributePainterContributions;
+import org.faultbench.juxtaposition.paint.Overlay;
+import org.faultbench.juxtaposition.paint.OverlayContributions;
 import org.faultbench.sim.BoundingFault;
 import org.faultbench.sim.ExceedanceLevel;
 import org.faultbench.sim.LeakProbabilityMap;
@@ -31,7 +37,8 @@ import org.faultbench.ui.CautionBanner;
 /**
  * The Allan diagram of a bounding fault of the active study: juxtaposition on the unrolled fault plane, reservoir
  * windows, leak probability after a run, the chosen unit's P90/P50/P10 contacts and the drained block's well drainage
- * depth; a hover read-out and PNG export.
+ * depth; a hover read-out and PNG export. The "Colour by" choice lists every attribute painter of the platform
+ * (built-in and contributed) and the view menu every overlay.
  */
 public class AllanDiagramView extends ViewPart {
     public static final String ID = "org.faultbench.juxtaposition.ui.allanDiagram";
@@ -41,6 +48,8 @@ public class AllanDiagramView extends ViewPart {
     private Combo paintCombo;
     private Label readout;
     private AllanCanvas canvas;
+    private final List<AttributePainter> painters = AttributePainterContributions.platformCatalog().list();
+    private final List<OverlayAction> overlayActions = new ArrayList<>();
     private final ActiveStudy.Listener listener = source -> {
         if (canvas != null && !canvas.isDisposed()) {
             canvas.getDisplay().asyncExec(this::reload);
@@ -59,13 +68,15 @@ public class AllanDiagramView extends ViewPart {
         unitCombo.addListener(SWT.Selection, e -> redrawDiagram());
         new Label(parent, SWT.NONE).setText("Colour by:");
         paintCombo = new Combo(parent, SWT.READ_ONLY);
-        for (AllanCanvas.Paint mode : AllanCanvas.Paint.values()) {
-            paintCombo.add(mode.label);
+        for (AttributePainter painter : painters) {
+            paintCombo.add(painter.name());
         }
         paintCombo.select(0);
-        paintCombo.addListener(SWT.Selection,
-                e -> canvas.paintBy(AllanCanvas.Paint.values()[paintCombo.getSelectionIndex()]));
+        paintCombo.addListener(SWT.Selection, e -> canvas.paintBy(painters.get(paintCombo.getSelectionIndex())));
         canvas = new AllanCanvas(parent);
+        if (!painters.isEmpty()) {
+            canvas.paintBy(painters.get(0));
+        }
         canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 6, 1));
         readout = new Label(parent, SWT.NONE);
         readout.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 6, 1));
@@ -77,6 +88,13 @@ public class AllanDiagramView extends ViewPart {
             }
         });
         getViewSite().getActionBars().getToolBarManager().add(new ExportAction());
+        IMenuManager menu = getViewSite().getActionBars().getMenuManager();
+        for (Overlay overlay : OverlayContributions.platformCatalog().list()) {
+            OverlayAction action = new OverlayAction(overlay);
+            overlayActions.add(action);
+            menu.add(action);
+        }
+        applyOverlays();
         ActiveStudy.get().addListener(listener);
         reload();
     }
@@ -135,6 +153,27 @@ public class AllanDiagramView extends ViewPart {
         return lines;
     }
 
+    private void applyOverlays() {
+        canvas.overlay(overlayActions.stream().filter(Action::isChecked).map(a -> a.overlay).toList());
+    }
+
+    /** Selects a painter by id, as the colour choice does; false when no such painter is installed. */
+    public boolean colourBy(String painterId) {
+        for (int i = 0; i < painters.size(); i++) {
+            if (painters.get(i).id().equals(painterId)) {
+                paintCombo.select(i);
+                canvas.paintBy(painters.get(i));
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Names in the colour choice, in order. */
+    public List<String> colourChoices() {
+        return List.of(paintCombo.getItems());
+    }
+
     /** The text of the read-out line under the diagram. */
     public String summaryText() {
         return readout.getText();
@@ -162,6 +201,22 @@ public class AllanDiagramView extends ViewPart {
     public void dispose() {
         ActiveStudy.get().removeListener(listener);
         super.dispose();
+    }
+
+    /** Shows or hides one overlay; every overlay starts shown. */
+    private final class OverlayAction extends Action {
+        final Overlay overlay;
+
+        OverlayAction(Overlay overlay) {
+            super("Show " + overlay.name(), IAction.AS_CHECK_BOX);
+            this.overlay = overlay;
+            setChecked(true);
+        }
+
+        @Override
+        public void run() {
+            applyOverlays();
+        }
     }
 
     private final class ExportAction extends Action {

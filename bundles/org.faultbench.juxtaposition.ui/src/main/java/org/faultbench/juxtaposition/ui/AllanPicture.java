@@ -6,6 +6,9 @@ import org.faultbench.faults.FaultPlaneSampler;
 import org.faultbench.juxtaposition.HungColumns;
 import org.faultbench.juxtaposition.JuxtapositionClass;
 import org.faultbench.juxtaposition.JuxtapositionRaster;
+import org.faultbench.juxtaposition.paint.FaultPlaneCell;
+import org.faultbench.juxtaposition.paint.OverlayScene;
+import org.faultbench.juxtaposition.paint.PaintScene;
 import org.faultbench.sim.BoundingFault;
 import org.faultbench.sim.LeakProbabilityMap;
 import org.faultbench.sim.SealAttributePainter;
@@ -96,6 +99,22 @@ final class AllanPicture {
                 + " throw %.1f m%s, leak probability %.0f %%", columns.u(k), z, unitName(raster.footwallUnit(k, row)),
                 unitName(raster.hangingWallUnit(k, row)), c.name().toLowerCase(java.util.Locale.ROOT).replace('_', '/'),
                 raster.throwAt(k, row), attribute, 100 * leakProbability(k, z));
+    }
+
+    /** What painters know of the whole diagram. */
+    PaintScene paintScene() {
+        return new PaintScene(column, java.util.Optional.ofNullable(sealAttribute), leak != null);
+    }
+
+    /** What painters know of a cell with data. */
+    FaultPlaneCell cell(int k, int row) {
+        double z = raster.rowDepth(row);
+        return new FaultPlaneCell(columns.u(k), z, raster.juxtapositionClass(k, row), raster.footwallUnit(k, row),
+                raster.hangingWallUnit(k, row), raster.throwAt(k, row), attributeAt(k, row), leakProbability(k, z));
+    }
+
+    OverlayScene overlayScene() {
+        return new OverlayScene(faultId, raster, column);
     }
 
     /** The painted seal attribute of a cell; NaN where none was painted. */

@@ -1,0 +1,19 @@
+package org.faultbench.juxtaposition.paint;
+
+import org.faultbench.juxtaposition.JuxtapositionClass;
+
+/**
+ * What a painter knows about one cell of the unrolled fault plane (a cell of a
+ * {@link org.faultbench.juxtaposition.JuxtapositionRaster} that has data).
+ *
+ * @param u along-strike distance of the cell centre, m
+ * @param z depth of the cell centre, m TVDSS
+ * @param footwallUnit unit index on the footwall (negative: overburden; ≥ unit count: underburden)
+ * @param hangingWallUnit the same on the hanging wall
+ * @param throwAt fault throw at the cell, m
+ * @param sealAttribute the seal criterion's attribute at the cell (e.g. SGR in %), NaN where none was computed
+ * @param leakProbability fraction of realisations leaking through the cell, 0 before a run
+ */
+public record FaultPlaneCell(double u, double z, JuxtapositionClass juxtaposition, int footwallUnit,
+        int hangingWallUnit, double throwAt, double sealAttribute, double leakProbability) {
+}
