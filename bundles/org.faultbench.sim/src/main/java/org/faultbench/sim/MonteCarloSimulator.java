@@ -40,7 +40,7 @@ public final class MonteCarloSimulator {
         Map<String, List<TornadoBar>> tornado = tornado(study, sampler, baseEvaluator, reservoirUnits);
         progress.worked(3);
 
-        ResultAccumulator accumulator = new ResultAccumulator(geometry, reservoirUnits.length);
+        ResultAccumulator accumulator = new ResultAccumulator(geometry, reservoirUnits.length, baseCase);
         ThreadLocal<RealisationEvaluator> evaluators = ThreadLocal.withInitial(() -> new RealisationEvaluator(geometry));
         boolean complete = new OrderedParallelRunner(settings.threads(), BLOCK_SIZE).run(settings.realisations(),
                 (first, count, cancelled) -> runBlock(geometry, sampler, evaluators.get(), settings.seed(), first, count,
@@ -51,7 +51,8 @@ public final class MonteCarloSimulator {
         for (int s = 0; s < reservoirUnits.length; s++) {
             String name = study.stratigraphy().units().get(reservoirUnits[s]).name();
             units.add(new UnitSummary(name, accumulator.statistics(s), accumulator.mechanismFractions(s),
-                    UnitSummary.baseCaseOf(baseCase, s), baseCase.mechanism[s], baseCase.leakLocation[s]));
+                    UnitSummary.baseCaseOf(baseCase, s), baseCase.mechanism[s], baseCase.leakLocation[s],
+                    accumulator.histograms(s)));
         }
         return new SimulationResult(study.name(), settings, accumulator.realisations(), complete, List.copyOf(units),
                 accumulator.leakMaps(), tornado, applicabilityWarnings(study));

@@ -28,12 +28,14 @@ final class ResultAccumulator {
 
     private final StudyGeometry geometry;
     private final List<Map<UnitQuantity, StreamingSummary>> statistics = new ArrayList<>();
+    private final List<Map<UnitQuantity, AdaptiveHistogram>> histograms = new ArrayList<>();
     private final long[][] mechanismCounts;
     /** Summed differences of the blocks' {@link LeakRuns}; integrated once, in {@link #leakMaps()}. */
     private final long[][] leakDifferences;
     private int realisations;
 
-    ResultAccumulator(StudyGeometry geometry, int reservoirUnits) {
+    /** @param baseCase the base-case outcome, from which the histograms' starting ranges are chosen */
+    ResultAccumulator(StudyGeometry geometry, int reservoirUnits, RealisationOutcome baseCase) {
         this.geometry = geometry;
         for (int s = 0; s < reservoirUnits; s++) {
             Map<UnitQuantity, StreamingSummary> perQuantity = new EnumMap<>(UnitQuantity.class);
@@ -41,6 +43,7 @@ final class ResultAccumulator {
                 perQuantity.put(q, new StreamingSummary());
             }
             statistics.add(perQuantity);
+            histograms.add(HistogramBins.forUnit(baseCase, s, AdaptiveHistogram.DEFAULT_BINS));
         }
         mechanismCounts = new long[reservoirUnits][Mechanism.values().length];
         leakDifferences = LeakRuns.newTotals(geometry.faults);
@@ -55,7 +58,9 @@ final class ResultAccumulator {
             for (int s = 0; s < statistics.size(); s++) {
                 Map<UnitQuantity, StreamingSummary> perQuantity = statistics.get(s);
                 for (UnitQuantity q : UnitQuantity.values()) {
-                    perQuantity.get(q).add(outcome.get(s, q));
+                    double value = outcome.get(s, q);
+                    perQuantity.get(q).add(value);
+                    histograms.get(s).get(q).add(value);
                 }
                 mechanismCounts[s][outcome.mechanism[s].ordinal()]++;
             }
@@ -69,6 +74,10 @@ final class ResultAccumulator {
 
     Map<UnitQuantity, StreamingSummary> statistics(int slot) {
         return statistics.get(slot);
+    }
+
+    Map<UnitQuantity, AdaptiveHistogram> histograms(int slot) {
+        return histograms.get(slot);
     }
 
     Map<Mechanism, Double> mechanismFractions(int slot) {

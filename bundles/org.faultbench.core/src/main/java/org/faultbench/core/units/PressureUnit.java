@@ -5,6 +5,7 @@ public enum PressureUnit {
     PASCAL("Pa", 1.0),
     KILOPASCAL("kPa", 1.0e3),
     BAR("bar", 1.0e5),
+    MEGAPASCAL("MPa", 1.0e6),
     /**
      * Pound-force per square inch: 0.45359237 kg x 9.80665 m/s^2 / (0.0254 m)^2 = 6894.757... Pa, from the exact
      * definitions of the pound, standard gravity and the inch.

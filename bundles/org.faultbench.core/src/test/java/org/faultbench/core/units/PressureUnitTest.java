@@ -19,6 +19,8 @@ class PressureUnitTest {
         assertEquals(1e5, PressureUnit.BAR.toPascals(1), 0);
         assertEquals(1.7408, PressureUnit.BAR.fromPascals(174_080), 1e-12);
         assertEquals(294.3, PressureUnit.KILOPASCAL.fromPascals(294_300), 1e-12);
+        // SI prefix mega = 10^6 (SI Brochure, 9th ed. 2019, Table 7): 1 MPa = 10 bar
+        assertEquals(10, PressureUnit.BAR.fromPascals(PressureUnit.MEGAPASCAL.toPascals(1)), 1e-12);
         // 1 bar = 14.5038 psi (arithmetic from the NIST factors)
         assertEquals(14.5038, PressureUnit.PSI.fromPascals(PressureUnit.BAR.toPascals(1)), 0.00005);
     }

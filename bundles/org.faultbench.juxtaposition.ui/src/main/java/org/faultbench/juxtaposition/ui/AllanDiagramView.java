@@ -37,7 +37,7 @@ import org.faultbench.ui.CautionBanner;
 /**
  * The Allan diagram of a bounding fault of the active study: juxtaposition on the unrolled fault plane, reservoir
  * windows, leak probability after a run, the chosen unit's P90/P50/P10 contacts and the drained block's well drainage
- * depth; a hover read-out and PNG export. The "Colour by" choice lists every attribute painter of the platform
+ * depth; a hover read-out and PNG and SVG export. The "Colour by" choice lists every attribute painter of the platform
  * (built-in and contributed) and the view menu every overlay.
  */
 public class AllanDiagramView extends ViewPart {
@@ -88,6 +88,7 @@ public class AllanDiagramView extends ViewPart {
             }
         });
         getViewSite().getActionBars().getToolBarManager().add(new ExportAction());
+        getViewSite().getActionBars().getToolBarManager().add(new SvgExportAction(this));
         IMenuManager menu = getViewSite().getActionBars().getMenuManager();
         for (Overlay overlay : OverlayContributions.platformCatalog().list()) {
             OverlayAction action = new OverlayAction(overlay);
@@ -172,6 +173,27 @@ public class AllanDiagramView extends ViewPart {
     /** Names in the colour choice, in order. */
     public List<String> colourChoices() {
         return List.of(paintCombo.getItems());
+    }
+
+    /** The picture on show; null when no study is open. */
+    AllanPicture picture() {
+        return canvas.picture();
+    }
+
+    /** The depth lines drawn over the current picture (contacts of the chosen unit, drainage depth). */
+    List<AllanCanvas.DepthLine> depthLines() {
+        AnalysisFile analysis = ActiveStudy.get().analysis().orElse(null);
+        return analysis == null ? List.of() : depthLines(analysis.study(), ActiveStudy.get().result().orElse(null));
+    }
+
+    /** Writes the diagram on show as SVG to {@code file} (tests and scripts); false when there is none. */
+    public boolean exportSvg(java.nio.file.Path file) throws java.io.IOException {
+        AllanPicture picture = picture();
+        if (picture == null) {
+            return false;
+        }
+        SvgExportAction.export(picture, depthLines(), file);
+        return true;
     }
 
     /** The text of the read-out line under the diagram. */

@@ -95,10 +95,12 @@ final class AllanPicture {
         JuxtapositionClass c = raster.juxtapositionClass(k, row);
         String attribute = sealAttribute == null ? ""
                 : String.format(java.util.Locale.ROOT, ", %s %.1f", sealAttribute, attributeAt(k, row));
-        return String.format(java.util.Locale.ROOT, "u %.0f m, z %.1f m: footwall %s | hanging wall %s \u2014 %s,"
-                + " throw %.1f m%s, leak probability %.0f %%", columns.u(k), z, unitName(raster.footwallUnit(k, row)),
-                unitName(raster.hangingWallUnit(k, row)), c.name().toLowerCase(java.util.Locale.ROOT).replace('_', '/'),
-                raster.throwAt(k, row), attribute, 100 * leakProbability(k, z));
+        org.faultbench.ui.DisplayUnits units = org.faultbench.ui.DisplayUnits.current();
+        return String.format(java.util.Locale.ROOT, "u %s, z %s: footwall %s | hanging wall %s \u2014 %s,"
+                + " throw %s%s, leak probability %.0f %%", units.lengthText(columns.u(k), 0), units.lengthText(z, 1),
+                unitName(raster.footwallUnit(k, row)), unitName(raster.hangingWallUnit(k, row)),
+                c.name().toLowerCase(java.util.Locale.ROOT).replace('_', '/'), units.lengthText(raster.throwAt(k, row), 1),
+                attribute, 100 * leakProbability(k, z));
     }
 
     /** What painters know of the whole diagram. */

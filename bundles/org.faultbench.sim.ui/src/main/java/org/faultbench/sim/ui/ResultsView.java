@@ -3,20 +3,27 @@ package org.faultbench.sim.ui;
 import java.util.List;
 import java.util.Locale;
 
+import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.jface.action.Action;
+import org.eclipse.jface.util.IPropertyChangeListener;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.TableViewer;
 import org.eclipse.jface.viewers.TableViewerColumn;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.CTabFolder;
+import org.eclipse.swt.custom.CTabItem;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.ui.part.ViewPart;
+import org.faultbench.sim.AdaptiveHistogram;
 import org.faultbench.sim.ExceedanceLevel;
 import org.faultbench.sim.SimulationResult;
 import org.faultbench.sim.SimulationSettings;
@@ -26,12 +33,17 @@ import org.faultbench.study.ActiveStudy;
 import org.faultbench.study.AnalysisFile;
 import org.faultbench.trap.Mechanism;
 import org.faultbench.ui.CautionBanner;
+import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.NumberText;
+import org.faultbench.ui.plot.XYPlotFigure;
+import org.faultbench.ui.preferences.FaultbenchPreferences;
 
 /**
  * Results of the Monte Carlo run of the active study: per reservoir unit the spill, leak, contact, column, attic and
- * volumes as P90/P50/P10 in the exceedance convention, the mechanism shares, and a tornado of the inputs that move
- * the contact most. The toolbar starts a run as a background job with progress and cancel.
+ * volumes as P90/P50/P10 in the exceedance convention, the mechanism shares, and below, per unit and quantity, the
+ * histogram and the exceedance curve with P90/P50/P10 markers, and the tornado of the inputs that move the contact
+ * most. Numbers are in the display units of the preferences and follow their changes. The toolbar starts a run as a
+ * background job with progress and cancel.
  */
 public class ResultsView extends ViewPart {
     public static final String ID = "org.faultbench.sim.ui.results";
@@ -39,8 +51,18 @@ public class ResultsView extends ViewPart {
     private Label status;
     private Label mechanisms;
     private TableViewer table;
-    private Combo tornadoUnit;
+    private TableColumn quantityColumn;
+    private Combo unitCombo;
+    private Combo quantityCombo;
+    private CTabFolder tabs;
+    private XYPlotFigure histogram;
+    private XYPlotFigure exceedance;
     private TornadoCanvas tornado;
+    private final IPropertyChangeListener preferences = e -> {
+        if (status != null && !status.isDisposed()) {
+            status.getDisplay().asyncExec(this::refresh);
+        }
+    };
     /** Demonstrations and screenshots: -Dfaultbench.autorun=true runs every study as soon as it is opened. */
     private static final boolean AUTORUN = Boolean.getBoolean("faultbench.autorun");
 
@@ -49,7 +71,7 @@ public class ResultsView extends ViewPart {
             status.getDisplay().asyncExec(this::refresh);
         }
         if (AUTORUN && source.result().isEmpty()) {
-            source.analysis().ifPresent(a -> runSimulation(a.realisations()));
+            source.analysis().ifPresent(a -> runSimulation(realisationsFor(a)));
         }
     };
 
@@ -64,16 +86,54 @@ public class ResultsView extends ViewPart {
         SashForm sash = new SashForm(parent, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         createTable(sash);
-        Composite tornadoPane = new Composite(sash, SWT.NONE);
-        tornadoPane.setLayout(new GridLayout(1, false));
-        tornadoUnit = new Combo(tornadoPane, SWT.READ_ONLY);
-        tornadoUnit.addListener(SWT.Selection, e -> showTornado());
-        tornado = new TornadoCanvas(tornadoPane);
-        tornado.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        sash.setWeights(new int[] { 60, 40 });
+        createDistributionPane(sash);
+        sash.setWeights(new int[] { 50, 50 });
         getViewSite().getActionBars().getToolBarManager().add(new RunAction());
         ActiveStudy.get().addListener(listener);
+        FaultbenchPreferences.addListener(preferences);
         refresh();
+    }
+
+    /** Unit and quantity choosers above tabs with the histogram, the exceedance curve and the tornado. */
+    private void createDistributionPane(Composite parent) {
+        Composite pane = new Composite(parent, SWT.NONE);
+        pane.setLayout(new GridLayout(4, false));
+        new Label(pane, SWT.NONE).setText("Unit:");
+        unitCombo = new Combo(pane, SWT.READ_ONLY);
+        unitCombo.addListener(SWT.Selection, e -> showDistribution());
+        new Label(pane, SWT.NONE).setText("Quantity:");
+        quantityCombo = new Combo(pane, SWT.READ_ONLY);
+        for (UnitQuantity q : ResultRow.SHOWN) {
+            quantityCombo.add(q.label());
+        }
+        quantityCombo.select(List.of(ResultRow.SHOWN).indexOf(UnitQuantity.CONTACT));
+        quantityCombo.addListener(SWT.Selection, e -> showDistribution());
+        tabs = new CTabFolder(pane, SWT.BORDER | SWT.BOTTOM);
+        tabs.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 4, 1));
+        histogram = new XYPlotFigure();
+        tab("Histogram", plotCanvas(histogram));
+        exceedance = new XYPlotFigure();
+        tab("Cumulative (exceedance)", plotCanvas(exceedance));
+        tornado = new TornadoCanvas(tabs);
+        tab("Tornado", tornado);
+        tabs.setSelection(0);
+    }
+
+    private FigureCanvas plotCanvas(XYPlotFigure figure) {
+        FigureCanvas canvas = new FigureCanvas(tabs, SWT.DOUBLE_BUFFERED);
+        canvas.setBackground(canvas.getDisplay().getSystemColor(SWT.COLOR_WHITE));
+        canvas.setContents(figure);
+        canvas.setScrollBarVisibility(FigureCanvas.NEVER);
+        // the figure fills the canvas: the plot follows the view's size
+        canvas.addListener(SWT.Resize, e -> figure.setBounds(new org.eclipse.draw2d.geometry.Rectangle(0, 0,
+                canvas.getClientArea().width, canvas.getClientArea().height)));
+        return canvas;
+    }
+
+    private void tab(String title, Control control) {
+        CTabItem item = new CTabItem(tabs, SWT.NONE);
+        item.setText(title);
+        item.setControl(control);
     }
 
     private void createTable(Composite parent) {
@@ -82,7 +142,7 @@ public class ResultsView extends ViewPart {
         t.setHeaderVisible(true);
         t.setLinesVisible(true);
         column("Unit", 110, r -> r.unit());
-        column("Quantity", 260, r -> r.quantity());
+        quantityColumn = column("Quantity", 260, r -> r.quantity());
         column("P90 (low)", 90, r -> NumberText.of(r.p90(), 1));
         column("P50", 90, r -> NumberText.of(r.p50(), 1));
         column("P10 (high)", 90, r -> NumberText.of(r.p10(), 1));
@@ -91,7 +151,7 @@ public class ResultsView extends ViewPart {
         table.setContentProvider(ArrayContentProvider.getInstance());
     }
 
-    private void column(String title, int width, java.util.function.Function<ResultRow, String> text) {
+    private TableColumn column(String title, int width, java.util.function.Function<ResultRow, String> text) {
         TableViewerColumn c = new TableViewerColumn(table, SWT.LEFT);
         c.getColumn().setText(title);
         c.getColumn().setWidth(width);
@@ -101,6 +161,7 @@ public class ResultsView extends ViewPart {
                 return text.apply((ResultRow) element);
             }
         });
+        return c.getColumn();
     }
 
     private void refresh() {
@@ -109,25 +170,31 @@ public class ResultsView extends ViewPart {
         }
         ActiveStudy active = ActiveStudy.get();
         SimulationResult result = active.result().orElse(null);
+        DisplayUnits units = DisplayUnits.current();
+        quantityColumn.setText("Quantity (lengths in " + units.lengthSymbol() + ", volumes in " + units.volumeSymbol()
+                + ")");
         if (result == null) {
             status.setText(active.analysis().map(a -> "Study '" + a.study().name() + "': press Run to simulate "
-                    + a.realisations() + " realisations. " + ExceedanceLevel.CONVENTION + ".")
+                    + realisationsFor(a) + " realisations. " + ExceedanceLevel.CONVENTION + ".")
                     .orElse("No study is open. Per-unit spill, leak, contact and column appear here as P90/P50/P10 "
                             + "(exceedance convention) after a Monte Carlo run."));
             mechanisms.setText("");
             table.setInput(List.of());
+            unitCombo.setItems(new String[0]);
+            histogram.showMessage("The histogram of the chosen unit and quantity appears here after a run.");
+            exceedance.showMessage("The probability of exceeding each value appears here after a run.");
             tornado.show("", Double.NaN, List.of());
         } else {
             status.setText(String.format(Locale.ROOT, "%s: %d realisations, seed %d%s. %s.", result.studyName(),
                     result.realisationsRun(), result.settings().seed(), result.complete() ? "" : " (cancelled: partial)",
                     ExceedanceLevel.CONVENTION));
             mechanisms.setText(mechanismText(result));
-            table.setInput(ResultRow.of(result));
-            String selected = tornadoUnit.getText();
-            tornadoUnit.setItems(result.tornado().keySet().toArray(String[]::new));
-            int index = tornadoUnit.indexOf(selected);
-            tornadoUnit.select(Math.max(0, index));
-            showTornado();
+            table.setInput(ResultRow.of(result, units));
+            String selected = unitCombo.getText();
+            unitCombo.setItems(result.units().stream().map(UnitSummary::unitName).toArray(String[]::new));
+            int index = unitCombo.indexOf(selected);
+            unitCombo.select(Math.max(0, index));
+            showDistribution();
         }
         status.getParent().layout(true, true);
     }
@@ -149,15 +216,66 @@ public class ResultsView extends ViewPart {
         return text.toString();
     }
 
-    private void showTornado() {
+    private UnitSummary selectedUnit(SimulationResult result) {
+        String unit = unitCombo.getText();
+        return result.units().stream().filter(u -> u.unitName().equals(unit)).findFirst().orElse(null);
+    }
+
+    /** Redraws the histogram, exceedance curve and tornado of the chosen unit and quantity. */
+    private void showDistribution() {
         SimulationResult result = ActiveStudy.get().result().orElse(null);
-        String unit = tornadoUnit.getText();
-        if (result == null || unit.isEmpty()) {
+        UnitSummary summary = result == null ? null : selectedUnit(result);
+        if (summary == null) {
             return;
         }
-        UnitSummary summary = result.units().stream().filter(u -> u.unitName().equals(unit)).findFirst().orElse(null);
-        double base = summary == null ? Double.NaN : summary.baseCase().get(UnitQuantity.CONTACT);
-        tornado.show(unit, base, result.tornado().getOrDefault(unit, List.of()));
+        UnitQuantity q = ResultRow.SHOWN[Math.max(0, quantityCombo.getSelectionIndex())];
+        AdaptiveHistogram h = summary.histogram(q);
+        DisplayUnits units = DisplayUnits.current();
+        if (h == null || h.finiteCount() == 0) {
+            String why = summary.unitName() + ": no realisation gave a " + q.label() + ".";
+            histogram.showMessage(why);
+            exceedance.showMessage(why);
+        } else {
+            HistogramPlots.Plot bars = HistogramPlots.histogram(q, h, summary.statistics(q), units);
+            histogram.show(bars.x(), bars.y(), false, bars.series());
+            HistogramPlots.Plot curve = HistogramPlots.exceedance(q, h, summary.statistics(q), units);
+            exceedance.show(curve.x(), curve.y(), false, curve.series());
+        }
+        tornado.show(summary.unitName(), summary.baseCase().get(UnitQuantity.CONTACT),
+                result.tornado().getOrDefault(summary.unitName(), List.of()));
+    }
+
+    /** Chooses the unit and quantity of the histogram and exceedance tabs (tests, scripts). */
+    public void showDistribution(String unit, UnitQuantity quantity) {
+        unitCombo.select(unitCombo.indexOf(unit));
+        quantityCombo.select(List.of(ResultRow.SHOWN).indexOf(quantity));
+        showDistribution();
+    }
+
+    /** The histogram figure (tests). */
+    public XYPlotFigure histogramFigure() {
+        return histogram;
+    }
+
+    /** The exceedance-curve figure (tests). */
+    public XYPlotFigure exceedanceFigure() {
+        return exceedance;
+    }
+
+    /** The header of the quantity column, naming the display units. */
+    public String quantityHeader() {
+        return quantityColumn.getText();
+    }
+
+    /**
+     * Realisations of a run from the toolbar: the analysis file's simulation.realisations when it gives one, else the
+     * default of the preferences.
+     */
+    static int realisationsFor(AnalysisFile analysis) {
+        var document = analysis.document();
+        boolean given = document != null && document.has("simulation") && document.get("simulation").isJsonObject()
+                && document.getAsJsonObject("simulation").has("realisations");
+        return given ? analysis.realisations() : FaultbenchPreferences.defaultRealisations();
     }
 
     /** The text the view currently shows in its status line. */
@@ -192,18 +310,20 @@ public class ResultsView extends ViewPart {
     @Override
     public void dispose() {
         ActiveStudy.get().removeListener(listener);
+        FaultbenchPreferences.removeListener(preferences);
         super.dispose();
     }
 
     private final class RunAction extends Action {
         RunAction() {
             super("Run Monte Carlo");
-            setToolTipText("Run the Monte Carlo analysis of the open study in the background (cancel from the progress bar)");
+            setToolTipText("Run the Monte Carlo analysis of the open study in the background (cancel from the progress"
+                    + " bar); realisations from the study file, else from Window > Preferences > Faultbench");
         }
 
         @Override
         public void run() {
-            ActiveStudy.get().analysis().ifPresent(a -> runSimulation(a.realisations()));
+            ActiveStudy.get().analysis().ifPresent(a -> runSimulation(realisationsFor(a)));
         }
     }
 }

@@ -13,8 +13,8 @@ import org.eclipse.swt.graphics.Color;
 import org.faultbench.ui.NumberText;
 
 /**
- * An x-y plot as a draw2d figure: axes with ticks and titles, series as lines, symbols or vertical markers, and a
- * legend. Points that are not finite, or not positive on a log axis, are skipped rather than drawn at the edge.
+ * An x-y plot as a draw2d figure: axes with ticks and titles, series as lines, symbols, vertical markers or bars,
+ * and a legend. Points that are not finite, or not positive on a log axis, are skipped rather than drawn at the edge.
  */
 public class XYPlotFigure extends Figure {
     private static final int LEFT = 64;
@@ -137,6 +137,10 @@ public class XYPlotFigure extends Figure {
     }
 
     private void paintSeries(Graphics g, PlotSeries s, Rectangle area) {
+        if (s.style() == PlotSeries.Style.BARS) {
+            paintBars(g, s);
+            return;
+        }
         Color colour = new Color(s.colour());
         g.setForegroundColor(colour);
         g.setBackgroundColor(colour);
@@ -173,6 +177,40 @@ public class XYPlotFigure extends Figure {
         g.setLineWidth(1);
     }
 
+    /** Bars from the baseline (0, or the bottom of a log axis) up to each y, filled pale and outlined. */
+    private void paintBars(Graphics g, PlotSeries s) {
+        double[] x = s.x();
+        double[] y = s.y();
+        double baseline = yAxis.logarithmic() ? yAxis.min() : Math.max(yAxis.min(), Math.min(0, yAxis.max()));
+        Color outline = new Color(s.colour());
+        Color fill = new Color(paler(s.colour()));
+        g.setLineWidth(1);
+        g.setLineStyle(SWT.LINE_SOLID);
+        for (int i = 0; i < x.length; i++) {
+            if (!plottable(x[i], xAxis) || !plottable(y[i], yAxis)) {
+                continue;
+            }
+            double left = i > 0 ? (x[i - 1] + x[i]) / 2 : x[i] - (x.length > 1 ? (x[1] - x[0]) / 2 : 0.5);
+            double right = i + 1 < x.length ? (x[i] + x[i + 1]) / 2
+                    : x[i] + (x.length > 1 ? (x[i] - x[i - 1]) / 2 : 0.5);
+            int px0 = toPixelX(left);
+            int px1 = toPixelX(right);
+            int top = toPixelY(y[i]);
+            int bottom = toPixelY(baseline);
+            Rectangle bar = new Rectangle(Math.min(px0, px1), Math.min(top, bottom), Math.max(1, Math.abs(px1 - px0)),
+                    Math.abs(bottom - top));
+            g.setBackgroundColor(fill);
+            g.fillRectangle(bar);
+            g.setForegroundColor(outline);
+            g.drawRectangle(bar);
+        }
+    }
+
+    /** Halfway to white: a fill that keeps outlines and markers readable over it. */
+    static org.eclipse.swt.graphics.RGB paler(org.eclipse.swt.graphics.RGB c) {
+        return new org.eclipse.swt.graphics.RGB((c.red + 255) / 2, (c.green + 255) / 2, (c.blue + 255) / 2);
+    }
+
     private static boolean plottable(double v, PlotAxis axis) {
         return Double.isFinite(v) && (!axis.logarithmic() || v > 0);
     }
@@ -192,6 +230,10 @@ public class XYPlotFigure extends Figure {
             g.setBackgroundColor(colour);
             if (s.style() == PlotSeries.Style.POINTS) {
                 g.fillOval(x + 6, y + d.height / 2 - 4, 9, 9);
+            } else if (s.style() == PlotSeries.Style.BARS) {
+                g.setBackgroundColor(new Color(paler(s.colour())));
+                g.fillRectangle(x + 4, y + 2, 14, d.height - 4);
+                g.drawRectangle(x + 4, y + 2, 14, d.height - 4);
             } else {
                 g.setLineWidth(2);
                 g.setLineStyle(s.style() == PlotSeries.Style.DASHED_LINE ? SWT.LINE_DASH : SWT.LINE_SOLID);
