@@ -16,7 +16,10 @@ cp -r "$FAULTBENCH_ROOT/demo-workspace/." "$WS/" 2>/dev/null || true
 trap 'kill $APP $XVFB 2>/dev/null; rm -rf "$WS"' EXIT
 sleep 1
 # -Dfaultbench.autorun runs the workspace's study on opening, so the picture shows results
-DISPLAY=$DISPLAY_NUM FAULTBENCH_VMARGS="-Dfaultbench.autorun=true" "$FAULTBENCH_PRODUCT/faultbench.sh" -data "$WS" >"$WS/console.log" 2>&1 &
+# FAULTBENCH_EXTRA_VMARGS adds system properties (e.g. the perspective to start in); @WS@ stands for the workspace copy
+EXTRA=$(printf '%s' "${FAULTBENCH_EXTRA_VMARGS:-}" | sed "s#@WS@#$WS#g")
+DISPLAY=$DISPLAY_NUM FAULTBENCH_VMARGS="-Dfaultbench.autorun=true $EXTRA" "$FAULTBENCH_PRODUCT/faultbench.sh" -data "$WS" \
+  -clearPersistedState >"$WS/console.log" 2>&1 &
 APP=$!
 for i in $(seq 1 60); do
   if DISPLAY=$DISPLAY_NUM xwininfo -root -tree 2>/dev/null | grep -q '"Faultbench'; then break; fi

@@ -19,9 +19,10 @@ class FaultbenchWorkbenchAdvisor extends WorkbenchAdvisor {
         StudyLoadJob.firstWorkspaceStudy().ifPresent(file -> new StudyLoadJob(file).schedule());
     }
 
+    /** The trap-study perspective, or the one named by -Dfaultbench.perspective (scripted screenshots). */
     @Override
     public String getInitialWindowPerspectiveId() {
-        return TrapStudyPerspective.ID;
+        return System.getProperty("faultbench.perspective", TrapStudyPerspective.ID);
     }
 
     @Override
