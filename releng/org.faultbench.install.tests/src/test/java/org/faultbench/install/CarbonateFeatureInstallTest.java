@@ -6,12 +6,14 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import java.util.zip.GZIPInputStream;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -50,9 +52,17 @@ class CarbonateFeatureInstallTest {
                 "the carbonate bundle is configured in the extended product");
         assertFalse(bundlesInfo(PLAIN).contains("org.faultbench.seal.carbonate,"),
                 "the plain product does not have it");
-        assertTrue(Files.readString(EXTENDED.resolve(
-                "p2/org.eclipse.equinox.p2.engine/profileRegistry/DefaultProfile.profile").resolve(newestProfile()))
-                .contains("org.faultbench.carbonate.feature.feature.group"), "p2 recorded the installed feature");
+        assertTrue(profileText(EXTENDED.resolve("p2/org.eclipse.equinox.p2.engine/profileRegistry/DefaultProfile.profile")
+                .resolve(newestProfile())).contains("org.faultbench.carbonate.feature.feature.group"),
+                "p2 recorded the installed feature in the product's profile");
+    }
+
+    /** A p2 profile file, plain or gzipped. */
+    private static String profileText(Path file) throws IOException {
+        try (InputStream in = Files.newInputStream(file)) {
+            InputStream content = file.toString().endsWith(".gz") ? new GZIPInputStream(in) : in;
+            return new String(content.readAllBytes(), StandardCharsets.UTF_8);
+        }
     }
 
     private static String newestProfile() throws IOException {
