@@ -28,7 +28,7 @@ import org.locationtech.jts.triangulate.quadedge.LocateFailureException;
  * triangulation adds the points it needs itself.
  * <p>
  * Vertices go in in a biased randomised order ({@link InsertionOrder}): in the sorted order of JTS's own builder,
- * 100,000 contour vertices took about half a minute.
+ * the conforming triangulation of 100,000 contour vertices took 10 &ndash; 12 s of CPU time, in this order 2 &ndash; 4 s.
  */
 final class TinMesh {
     private static final long INSERTION_SEED = 1974;
