@@ -8,11 +8,12 @@ import java.util.Map;
 import org.faultbench.digitize.io.XyzPoint;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
-import org.locationtech.jts.geom.GeometryFactory;
 import org.locationtech.jts.geom.LineSegment;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.index.strtree.STRtree;
-import org.locationtech.jts.triangulate.ConformingDelaunayTriangulationBuilder;
+import org.locationtech.jts.triangulate.ConformingDelaunayTriangulator;
+import org.locationtech.jts.triangulate.ConstraintVertex;
+import org.locationtech.jts.triangulate.Segment;
 import org.locationtech.jts.triangulate.ConstraintEnforcementException;
 import org.locationtech.jts.triangulate.quadedge.LocateFailureException;
 
@@ -25,8 +26,12 @@ import org.locationtech.jts.triangulate.quadedge.LocateFailureException;
  * Contours are not densified beforehand: JTS's incremental triangulation can fail to locate points in long runs of
  * exactly collinear points (JTS issue 1121), which densifying straight contour segments creates; the conforming
  * triangulation adds the points it needs itself.
+ * <p>
+ * Vertices go in in a biased randomised order ({@link InsertionOrder}): in the sorted order of JTS's own builder,
+ * the conforming triangulation of 100,000 contour vertices took 10 &ndash; 12 s of CPU time, in this order 2 &ndash; 4 s.
  */
 final class TinMesh {
+    private static final long INSERTION_SEED = 1974;
     private final double[] x;
     private final double[] y;
     private final double[] z;
@@ -44,33 +49,44 @@ final class TinMesh {
     /** Triangulates the control points and contours of {@code input}. */
     static TinMesh build(GriddingInput input) {
         requireNoCrossing(input.contours());
-        GeometryFactory factory = new GeometryFactory();
-        List<LineString> constraints = new ArrayList<>();
         STRtree contourSegments = new STRtree();
         Map<Coordinate, Double> inputDepths = new HashMap<>();
+        List<ConstraintVertex> sites = new ArrayList<>();
         for (XyzPoint p : input.points()) {
-            inputDepths.putIfAbsent(new Coordinate(p.x(), p.y()), p.z());
+            Coordinate c = new Coordinate(p.x(), p.y(), p.z());
+            if (inputDepths.putIfAbsent(c, p.z()) == null) {
+                sites.add(new ConstraintVertex(c));
+            }
         }
+        Map<Coordinate, ConstraintVertex> constraintVertices = new HashMap<>();
+        List<ConstraintVertex> segmentVertices = new ArrayList<>();
+        List<Segment> segments = new ArrayList<>();
         for (ContourLine contour : input.contours()) {
             Coordinate[] points = contour.line().getCoordinates();
             for (int k = 0; k < points.length; k++) {
                 points[k] = new Coordinate(points[k].x, points[k].y, contour.z());
                 inputDepths.putIfAbsent(points[k], contour.z());
+                if (!constraintVertices.containsKey(points[k])) {
+                    ConstraintVertex vertex = new ConstraintVertex(points[k]);
+                    constraintVertices.put(points[k], vertex);
+                    segmentVertices.add(vertex);
+                }
+                if (k > 0) {
+                    segments.add(new Segment(points[k - 1], points[k]));
+                    contourSegments.insert(new Envelope(points[k - 1], points[k]),
+                            new DepthSegment(new LineSegment(points[k - 1], points[k]), contour.z()));
+                }
             }
-            for (int k = 0; k + 1 < points.length; k++) {
-                contourSegments.insert(new Envelope(points[k], points[k + 1]),
-                        new DepthSegment(new LineSegment(points[k], points[k + 1]), contour.z()));
-            }
-            constraints.add(factory.createLineString(points));
         }
-        Coordinate[] sites = input.points().stream().map(p -> new Coordinate(p.x(), p.y(), p.z()))
-                .toArray(Coordinate[]::new);
-        ConformingDelaunayTriangulationBuilder builder = new ConformingDelaunayTriangulationBuilder();
-        builder.setSites(factory.createMultiPointFromCoords(sites));
-        builder.setConstraints(factory.createMultiLineString(constraints.toArray(LineString[]::new)));
-        builder.setTolerance(mergeTolerance(input));
+        sites.removeIf(site -> constraintVertices.containsKey(site.getCoordinate()));
         try {
-            return fromTriangles(builder.getSubdivision().getTriangleCoordinates(false), inputDepths, contourSegments);
+            ConformingDelaunayTriangulator triangulator = new ConformingDelaunayTriangulator(
+                    InsertionOrder.brio(sites, INSERTION_SEED), mergeTolerance(input));
+            triangulator.setConstraints(segments, InsertionOrder.brio(segmentVertices, INSERTION_SEED));
+            triangulator.formInitialDelaunay();
+            triangulator.enforceConstraints();
+            return fromTriangles(triangulator.getSubdivision().getTriangleCoordinates(false), inputDepths,
+                    contourSegments);
         } catch (ConstraintEnforcementException | LocateFailureException failure) {
             throw new IllegalArgumentException("the data could not be triangulated (" + failure.getMessage()
                     + "); look for nearly coincident points near the place named, or grid by minimum curvature",
