@@ -3,7 +3,6 @@ package org.faultbench.faults.ui;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.RGB;
 import org.eclipse.swt.layout.GridData;
@@ -18,6 +17,7 @@ import org.faultbench.faults.scaling.ScalingEnvelope;
 import org.faultbench.faults.scaling.ScalingLaw;
 import org.faultbench.ui.NumberText;
 import org.faultbench.ui.plot.PlotAxis;
+import org.faultbench.ui.plot.PlotCanvas;
 import org.faultbench.ui.plot.PlotSeries;
 import org.faultbench.ui.plot.XYPlotFigure;
 
@@ -44,10 +44,8 @@ public class DisplacementLengthView extends ViewPart {
         parent.setLayout(new GridLayout(1, false));
         readout = new Label(parent, SWT.WRAP);
         readout.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        FigureCanvas canvas = new FigureCanvas(parent, SWT.DOUBLE_BUFFERED);
-        canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         plot = new XYPlotFigure();
-        canvas.getLightweightSystem().setContents(plot);
+        PlotCanvas.create(parent, plot).setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         FaultReview.get().addListener(listener);
         draw();
     }
@@ -91,7 +89,7 @@ public class DisplacementLengthView extends ViewPart {
             text.append(p.faultId()).append(": D/L ").append(NumberText.of(p.ratio(), 3)).append("   ");
         }
         text.append("Band: ").append(band.source());
-        readout.setText(text.toString());
+        readout.setText(Labels.escape(text.toString()));
         readout.getParent().layout(true);
     }
 

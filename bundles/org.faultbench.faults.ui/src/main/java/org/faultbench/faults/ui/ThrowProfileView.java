@@ -10,8 +10,6 @@ import org.eclipse.core.runtime.CoreException;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
-import org.eclipse.draw2d.FigureCanvas;
-import org.eclipse.draw2d.LightweightSystem;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.RGB;
@@ -31,6 +29,7 @@ import org.faultbench.faults.qc.QcFinding;
 import org.faultbench.study.ActiveStudy;
 import org.faultbench.ui.NumberText;
 import org.faultbench.ui.plot.PlotAxis;
+import org.faultbench.ui.plot.PlotCanvas;
 import org.faultbench.ui.plot.PlotSeries;
 import org.faultbench.ui.plot.XYPlotFigure;
 
@@ -76,11 +75,8 @@ public class ThrowProfileView extends ViewPart {
         });
         readout = new Label(parent, SWT.WRAP);
         readout.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1));
-        FigureCanvas canvas = new FigureCanvas(parent, SWT.DOUBLE_BUFFERED);
-        canvas.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
         plot = new XYPlotFigure();
-        LightweightSystem lws = canvas.getLightweightSystem();
-        lws.setContents(plot);
+        PlotCanvas.create(parent, plot).setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
         FaultReview.get().addListener(reviewListener);
         ActiveStudy.get().addListener(studyListener);
         getSite().getPage().addSelectionListener(markerListener);
@@ -165,9 +161,9 @@ public class ThrowProfileView extends ViewPart {
         double max = Math.max(0, max(profile.validThrows()));
         plot.show(PlotAxis.linear("distance along strike (m)", 0, fault.length()),
                 PlotAxis.linear("throw (m)", min, max), false, series);
-        readout.setText(fault.name() + ": length " + NumberText.of(fault.length(), 0) + " m, max |throw| "
+        readout.setText(Labels.escape(fault.name() + ": length " + NumberText.of(fault.length(), 0) + " m, max |throw| "
                 + NumberText.of(profile.maxAbsThrow(), 1) + " m. " + fitText + "  " + findings.size()
-                + " QC finding(s)" + (findings.isEmpty() ? "." : ": " + findings.get(0).message()));
+                + " QC finding(s)" + (findings.isEmpty() ? "." : ": " + findings.get(0).message())));
         readout.getParent().layout(true);
     }
 

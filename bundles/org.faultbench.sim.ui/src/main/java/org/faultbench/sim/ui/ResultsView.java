@@ -3,7 +3,6 @@ package org.faultbench.sim.ui;
 import java.util.List;
 import java.util.Locale;
 
-import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.jface.action.Action;
 import org.eclipse.jface.util.IPropertyChangeListener;
 import org.eclipse.jface.viewers.ArrayContentProvider;
@@ -35,6 +34,7 @@ import org.faultbench.trap.Mechanism;
 import org.faultbench.ui.CautionBanner;
 import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.NumberText;
+import org.faultbench.ui.plot.PlotCanvas;
 import org.faultbench.ui.plot.XYPlotFigure;
 import org.faultbench.ui.preferences.FaultbenchPreferences;
 
@@ -87,7 +87,7 @@ public class ResultsView extends ViewPart {
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         createTable(sash);
         createDistributionPane(sash);
-        sash.setWeights(new int[] { 50, 50 });
+        sash.setWeights(new int[] { 35, 65 });
         getViewSite().getActionBars().getToolBarManager().add(new RunAction());
         ActiveStudy.get().addListener(listener);
         FaultbenchPreferences.addListener(preferences);
@@ -119,15 +119,8 @@ public class ResultsView extends ViewPart {
         tabs.setSelection(0);
     }
 
-    private FigureCanvas plotCanvas(XYPlotFigure figure) {
-        FigureCanvas canvas = new FigureCanvas(tabs, SWT.DOUBLE_BUFFERED);
-        canvas.setBackground(canvas.getDisplay().getSystemColor(SWT.COLOR_WHITE));
-        canvas.setContents(figure);
-        canvas.setScrollBarVisibility(FigureCanvas.NEVER);
-        // the figure fills the canvas: the plot follows the view's size
-        canvas.addListener(SWT.Resize, e -> figure.setBounds(new org.eclipse.draw2d.geometry.Rectangle(0, 0,
-                canvas.getClientArea().width, canvas.getClientArea().height)));
-        return canvas;
+    private Control plotCanvas(XYPlotFigure figure) {
+        return PlotCanvas.create(tabs, figure);
     }
 
     private void tab(String title, Control control) {
