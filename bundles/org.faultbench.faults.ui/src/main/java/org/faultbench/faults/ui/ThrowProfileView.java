@@ -113,9 +113,15 @@ public class ThrowProfileView extends ViewPart {
         faultCombo.removeAll();
         FaultReview.get().state().ifPresent(s -> s.model().faults().forEach(f -> faultCombo.add(f.id())));
         int index = faultCombo.indexOf(selected);
-        faultCombo.select(Math.max(0, index));
+        faultCombo.select(index >= 0 ? index : Math.max(0, firstFaultWithFindings()));
         faultCombo.getParent().layout(true);
         draw();
+    }
+
+    /** Index of the first fault QC found something on, so a review opens where there is work; -1 if none. */
+    private int firstFaultWithFindings() {
+        return FaultReview.get().state().flatMap(s -> s.findings().stream().findFirst())
+                .map(f -> faultCombo.indexOf(f.faultId())).orElse(-1);
     }
 
     /** Shows fault {@code faultId} with position {@code u} (NaN: none) picked out, as from a Problems entry. */
