@@ -18,6 +18,8 @@ import org.faultbench.digitize.sketch.CutOffFeature;
 import org.faultbench.digitize.sketch.FaultPolygonFeature;
 import org.faultbench.digitize.sketch.FaultTraceFeature;
 import org.faultbench.digitize.sketch.MapSheet;
+import org.faultbench.digitize.sketch.MarkerFeature;
+import org.faultbench.digitize.sketch.MarkerKind;
 import org.faultbench.digitize.sketch.SheetFeature;
 import org.faultbench.digitize.sketch.TraceSide;
 import org.faultbench.digitize.sketch.Wall;
@@ -33,7 +35,7 @@ import org.faultbench.digitize.ui.editing.SnapTolerance;
 import org.faultbench.digitize.ui.editing.TraceTicks;
 import org.faultbench.digitize.ui.editing.TransformKindCommand;
 import org.faultbench.digitize.ui.store.ControlPointCsv;
-import org.faultbench.digitize.ui.store.GeoJsonMapSheetStore;
+import org.faultbench.digitize.ui.store.VersionedMapSheetStore;
 import org.faultbench.digitize.ui.store.MapSheetDocument;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
@@ -242,14 +244,16 @@ class MapEditorCommandsTest {
     }
 
     @Test
-    void standInStoreKeepsLinesControlPointsTransformAndScan() throws Exception {
+    void versionedStoreKeepsEveryFeatureControlPointsTransformAndScan() throws Exception {
         Path dir = Files.createTempDirectory("sheet");
         Path scan = dir.resolve("scan.png");
         MapSheet sheet = new MapSheet();
         sheet.add(new ContourFeature(sheet.nextId(), "Top A", 1502.5, line(0, 0, 10, 5, 20, 0)));
         sheet.add(new FaultTraceFeature(sheet.nextId(), "F1", line(5, -5, 5, 20), TraceSide.RIGHT));
         sheet.add(new CutOffFeature(sheet.nextId(), "F1", "Top A", Wall.HANGING_WALL, line(6, -5, 6, 20)));
-        GeoJsonMapSheetStore store = new GeoJsonMapSheetStore();
+        // markers were lost by the earlier stand-in store; the versioned file keeps them
+        sheet.add(new MarkerFeature(sheet.nextId(), MarkerKind.CREST, 12, 3, "Top A", "crest of the horst"));
+        VersionedMapSheetStore store = new VersionedMapSheetStore();
         Path file = store.defaultFileFor(scan);
         assertTrue(store.handles(file));
         store.save(file, new MapSheetDocument(sheet, exactGrid(), TransformKind.SIMILARITY,

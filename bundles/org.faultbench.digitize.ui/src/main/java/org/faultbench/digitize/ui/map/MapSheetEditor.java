@@ -34,9 +34,9 @@ import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.actions.ActionFactory;
 import org.faultbench.digitize.raster.ImagePyramid;
 import org.faultbench.digitize.ui.editing.MapDocument;
-import org.faultbench.digitize.ui.store.GeoJsonMapSheetStore;
 import org.faultbench.digitize.ui.store.MapDocuments;
 import org.faultbench.digitize.ui.store.MapSheetDocumentStore;
+import org.faultbench.digitize.ui.store.VersionedMapSheetStore;
 
 /**
  * The map editor: a scanned depth-structure map (drawn from its image pyramid) with the digitized sheet over it.
@@ -51,7 +51,7 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
     static final double[] ZOOM_LEVELS = { 0.05, 0.1, 0.125, 0.25, 0.375, 0.5, 0.75, 1, 1.5, 2, 3, 4, 6, 8 };
     private static final int PALETTE_WIDTH = 150;
 
-    private final MapSheetDocumentStore store = new GeoJsonMapSheetStore();
+    private final MapSheetDocumentStore store = new VersionedMapSheetStore();
     private PaletteRoot palette;
     private MapDocument document;
     private Path saveTo;

@@ -19,7 +19,7 @@ public final class OpenMapHandler extends AbstractHandler {
         IWorkbenchWindow window = HandlerUtil.getActiveWorkbenchWindowChecked(event);
         FileDialog dialog = new FileDialog(window.getShell(), SWT.OPEN);
         dialog.setText("Open a scanned map or a map sheet");
-        dialog.setFilterExtensions(new String[] { "*.png;*.jpg;*.jpeg;*.tif;*.tiff;*.bmp;*.mapsheet.geojson", "*" });
+        dialog.setFilterExtensions(new String[] { "*.png;*.jpg;*.jpeg;*.tif;*.tiff;*.bmp;*.mapsheet.json", "*" });
         dialog.setFilterNames(new String[] { "Scanned maps and map sheets", "All files" });
         String chosen = dialog.open();
         if (chosen != null) {

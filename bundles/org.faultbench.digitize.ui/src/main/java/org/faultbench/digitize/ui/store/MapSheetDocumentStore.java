@@ -4,9 +4,8 @@ import java.io.IOException;
 import java.nio.file.Path;
 
 /**
- * Reads and writes map-sheet files for the map editor. The editor knows only this interface, so the versioned
- * map-sheet file format of the study bundle can replace the stand-in {@link GeoJsonMapSheetStore} without touching
- * the editor.
+ * Reads and writes map-sheet files for the map editor. The editor knows only this interface; the product uses
+ * {@link VersionedMapSheetStore} (the versioned map-sheet file of the study bundle).
  */
 public interface MapSheetDocumentStore {
 
