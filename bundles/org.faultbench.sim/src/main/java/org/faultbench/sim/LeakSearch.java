@@ -1,6 +1,7 @@
 package org.faultbench.sim;
 
 import java.util.Arrays;
+import java.util.stream.IntStream;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.juxtaposition.ColumnIntervals;
@@ -42,6 +43,12 @@ final class LeakSearch {
     private final double[] locationDepth;
     /** Per unit slot, the depth of interest of its contacts ({@link #depthOfInterest}), kept up to date. */
     private final double[] interest;
+    /** Per fault, its columns in throw order (juxtaposition only, one column for all positions). */
+    private final ThrowOrderedColumns[] byThrow;
+    /** Unit boundaries below the reference horizon and the reservoir units, of the column in use. */
+    private double[] boundaries;
+    private int[] reservoirUnits;
+    private double boundaryMagnitude;
 
     // the realisation being searched
     private RealisationInputs in;
@@ -76,6 +83,8 @@ final class LeakSearch {
         locationColumn = new int[slots];
         locationDepth = new double[slots];
         interest = new double[slots];
+        byThrow = juxtapositionOnly ? geometry.faults.stream().map(ThrowOrderedColumns::new)
+                .toArray(ThrowOrderedColumns[]::new) : null;
     }
 
     /**
@@ -101,8 +110,16 @@ final class LeakSearch {
         Arrays.fill(leak, Double.POSITIVE_INFINITY);
         Arrays.fill(connection, Double.POSITIVE_INFINITY);
         Arrays.fill(locationFault, -1);
+        boolean byPair = juxtapositionOnly && !columnPerPosition;
+        if (byPair) {
+            usePairColumn();
+        }
         for (FaultPlaneFrame frame : geometry.faults) {
-            scanFault(frame);
+            if (byPair && byThrow[frame.index].realise(in, in.throwScale()[frame.index])) {
+                scanWindowsByPair(frame, byThrow[frame.index]);
+            } else {
+                scanFault(frame);
+            }
         }
         for (int s = 0; s < leak.length; s++) {
             if (locationFault[s] >= 0) {
@@ -126,6 +143,76 @@ final class LeakSearch {
             threshold.useColumn(column);
         }
         refTop = column.top(geometry.referenceUnit);
+    }
+
+    /** Takes the unit boundaries and reservoir units of the column in use for {@link #scanWindowsByPair}. */
+    private void usePairColumn() {
+        int size = hung.footwall().size();
+        if (boundaries == null || boundaries.length != size + 1) {
+            boundaries = new double[size + 1];
+            reservoirUnits = new int[(int) IntStream.range(0, size).filter(hung.footwall()::isReservoir).count()];
+        }
+        boundaryMagnitude = 0;
+        int n = 0;
+        for (int i = 0; i <= size; i++) {
+            boundaries[i] = hung.footwall().topBelowReference(i);
+            boundaryMagnitude = Math.max(boundaryMagnitude, Math.abs(boundaries[i]));
+            if (i < size && hung.footwall().isReservoir(i)) {
+                reservoirUnits[n++] = i;
+            }
+        }
+    }
+
+    /**
+     * Juxtaposition only, one column on both walls: the same windows as {@link #scanFault}, visited unit pair by unit
+     * pair over the stretch of columns, in throw order, where the pair can face each other. A window's top, base and
+     * cells do not depend on the order of the visit, and neither do the leak depth and the connection (minima); on a
+     * tie the leak location stays the one the column-by-column scan finds first, the lowest column.
+     */
+    private void scanWindowsByPair(FaultPlaneFrame frame, ThrowOrderedColumns columns) {
+        boolean onFootwall = frame.compartmentOnFootwall();
+        attic = frame.index == atticFault;
+        for (int s = 0; s < interest.length; s++) {
+            interest[s] = depthOfInterest(s);
+        }
+        double[] b = boundaries;
+        for (int i : reservoirUnits) {
+            for (int j : reservoirUnits) {
+                int s = slotOfUnit[onFootwall ? i : j];
+                // the units overlap where b[i] - b[j + 1] < throw < b[i + 1] - b[j], up to rounding
+                int first = columns.firstFrom(b[i] - b[j + 1], boundaryMagnitude);
+                int end = columns.firstAbove(b[i + 1] - b[j], boundaryMagnitude);
+                for (int p = first; p < end; p++) {
+                    double zFw = columns.footwall(p);
+                    double zHw = columns.hangingWall(p);
+                    // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
+                    double top = Math.max(zFw + b[i], zHw + b[j]);
+                    if (!(top < interest[s])) {
+                        continue;
+                    }
+                    double base = Math.min(zFw + b[i + 1], zHw + b[j + 1]);
+                    if (top < base) {
+                        pairWindow(frame, columns.column(p), s, top, base);
+                    }
+                }
+            }
+        }
+    }
+
+    /** {@link #juxtapositionWindow} for a window met out of column order. */
+    private void pairWindow(FaultPlaneFrame frame, int column, int s, double top, double base) {
+        if (attic) {
+            connection[s] = Math.min(connection[s], top);
+            interest[s] = depthOfInterest(s);
+        }
+        if (top < leak[s] || top == leak[s] && locationFault[s] == frame.index && column < locationColumn[s]) {
+            lowerLeak(s, top, frame, column, top);
+        }
+        if (leakRuns != null) {
+            // the windows of a column are disjoint, so their runs are too, in whatever order they come
+            leakRuns.addRun(frame.index, column, frame.firstRowCentredAtOrBelow(top),
+                    frame.firstRowCentredAtOrBelow(Math.min(base, spill[s])));
+        }
     }
 
     private void scanFault(FaultPlaneFrame frame) {
