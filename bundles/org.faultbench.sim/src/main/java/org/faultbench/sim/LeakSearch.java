@@ -187,8 +187,8 @@ final class LeakSearch {
                     double zHw = columns.hangingWall(p);
                     // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
                     double top = Math.max(zFw + b[i], zHw + b[j]);
-                    if (!(top < interest[s])) {
-                        continue;
+                    if (top > interest[s]) {
+                        continue; // a top at the depth of interest may still tie with the leak point in a lower column
                     }
                     double base = Math.min(zFw + b[i + 1], zHw + b[j + 1]);
                     if (top < base) {
