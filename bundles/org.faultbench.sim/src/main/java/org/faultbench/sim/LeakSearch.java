@@ -43,6 +43,16 @@ final class LeakSearch {
     private final double[] locationDepth;
     /** Per unit slot, the depth of interest of its contacts ({@link #depthOfInterest}), kept up to date. */
     private final double[] interest;
+    /**
+     * Per unit slot, the free-water level of some point of this realisation's contacts, so at least its leak depth: a
+     * point whose level cannot reach it cannot be the leak point, and its exact threshold pressure is not needed.
+     */
+    private final double[] bound;
+    /** Per unit slot, the least level above the bound: a point at or below it may still be (or tie with) the leak. */
+    private final double[] ceiling;
+    /** Per unit slot, where the previous realisation's leak point was (fault -1 = none): the bound is sought there. */
+    private final int[] hintFault;
+    private final int[] hintColumn;
     /** Per fault, its columns in throw order (juxtaposition only, one column for all positions). */
     private final ThrowOrderedColumns[] byThrow;
     /** Unit boundaries below the reference horizon and the reservoir units, of the column in use. */
@@ -83,6 +93,11 @@ final class LeakSearch {
         locationColumn = new int[slots];
         locationDepth = new double[slots];
         interest = new double[slots];
+        bound = new double[slots];
+        ceiling = new double[slots];
+        hintFault = new int[slots];
+        hintColumn = new int[slots];
+        Arrays.fill(hintFault, -1);
         byThrow = juxtapositionOnly ? geometry.faults.stream().map(ThrowOrderedColumns::new)
                 .toArray(ThrowOrderedColumns[]::new) : null;
     }
@@ -114,6 +129,13 @@ final class LeakSearch {
         if (byPair) {
             usePairColumn();
         }
+        Arrays.fill(bound, Double.POSITIVE_INFINITY);
+        if (!juxtapositionOnly && !columnPerPosition) {
+            boundFromHints();
+        }
+        for (int s = 0; s < bound.length; s++) {
+            ceiling[s] = Math.nextUp(bound[s]);
+        }
         for (FaultPlaneFrame frame : geometry.faults) {
             if (byPair && byThrow[frame.index].realise(in, in.throwScale()[frame.index])) {
                 scanWindowsByPair(frame, byThrow[frame.index]);
@@ -123,6 +145,8 @@ final class LeakSearch {
         }
         for (int s = 0; s < leak.length; s++) {
             if (locationFault[s] >= 0) {
+                hintFault[s] = locationFault[s];
+                hintColumn[s] = locationColumn[s];
                 FaultPlaneFrame frame = geometry.faults.get(locationFault[s]);
                 locations[s] = new LeakLocation(frame.bounding.id(), frame.u[locationColumn[s]], locationDepth[s]);
             }
@@ -215,6 +239,52 @@ final class LeakSearch {
         }
     }
 
+    /**
+     * Fault rock: rates every point of the fault-plane columns where the previous realisation's leak points were, to
+     * bound this realisation's leak depths from above. Realisations differ little, so the bound is usually close, and
+     * the scan then works out exact threshold pressures almost only near the leak point. Where the leak point lies is
+     * still decided by the scan alone (a point at the bound is rated exactly, so ties resolve as before).
+     */
+    private void boundFromHints() {
+        for (int s = 0; s < hintFault.length; s++) {
+            boolean seen = false;
+            for (int t = 0; t < s; t++) {
+                seen |= hintFault[t] == hintFault[s] && hintColumn[t] == hintColumn[s];
+            }
+            if (hintFault[s] >= 0 && !seen) {
+                boundFromColumn(geometry.faults.get(hintFault[s]), hintColumn[s]);
+            }
+        }
+    }
+
+    /** Lowers the bounds to the free-water levels of the points of one column, rated as the scan rates them. */
+    private void boundFromColumn(FaultPlaneFrame frame, int k) {
+        double zFw = frame.footwall[k] + in.depthError(frame.x[k], frame.y[k]);
+        double throwK = in.throwScale()[frame.index] * (frame.hangingWall[k] - frame.footwall[k]);
+        double zHw = zFw + throwK;
+        if (!Double.isFinite(zFw) || !Double.isFinite(zHw)) {
+            return; // the scan reports it
+        }
+        boolean onFootwall = frame.compartmentOnFootwall();
+        hung.juxtaposeReservoirs(zFw, zHw, Double.POSITIVE_INFINITY, intervals);
+        for (int n = 0; n < intervals.count(); n++) {
+            int s = slotOfUnit[onFootwall ? intervals.footwallUnit(n) : intervals.hangingWallUnit(n)];
+            double faultThrow = throwK >= 0 ? throwK : -throwK;
+            double positionShift = refTop - (throwK >= 0 ? zFw : zHw);
+            for (double z = intervals.top(n) + INSIDE; z < intervals.base(n); z = nextSample(frame, z)) {
+                try {
+                    threshold.moveTo(z, faultThrow, z + positionShift);
+                    double level = freeWaterLevel(z, threshold.exact());
+                    if (level < bound[s]) { // never NaN: that would bar every point
+                        bound[s] = level;
+                    }
+                } catch (RuntimeException e) {
+                    // a point the criterion cannot rate gives no bound; the scan reports it if it reaches it
+                }
+            }
+        }
+    }
+
     private void scanFault(FaultPlaneFrame frame) {
         double scale = in.throwScale()[frame.index];
         boolean onFootwall = frame.compartmentOnFootwall();
@@ -275,9 +345,13 @@ final class LeakSearch {
         return attic ? Math.max(depth, connection[s]) : depth;
     }
 
-    /** The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above. */
+    /**
+     * The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above, or
+     * for the leak depth, at or above the realisation's bound (which the leak depth cannot exceed).
+     */
     private double pointInterest(int s) {
-        return leakRuns != null ? Math.max(leak[s], spill[s]) : leak[s];
+        double leakCut = Math.min(leak[s], ceiling[s]);
+        return leakRuns != null ? Math.max(leakCut, spill[s]) : leakCut;
     }
 
     private void lowerLeak(int s, double level, FaultPlaneFrame frame, int column, double z) {
@@ -344,7 +418,7 @@ final class LeakSearch {
         for (double z = first; z < base && z + rise < pointInterest(s); z = nextSample(frame, z)) {
             threshold.moveTo(z, faultThrow, z + positionShift);
             double shallowest = freeWaterLevel(z, threshold.lowerBound());
-            if (shallowest < leak[s]) {
+            if (shallowest < leak[s] && shallowest < ceiling[s]) {
                 double level = freeWaterLevel(z, threshold.exact());
                 if (level < leak[s]) {
                     lowerLeak(s, level, frame, column, z);
