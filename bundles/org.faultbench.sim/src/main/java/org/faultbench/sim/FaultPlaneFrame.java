@@ -100,11 +100,13 @@ final class FaultPlaneFrame {
      */
     int firstRowCentredAtOrBelow(double z) {
         double estimate = Math.ceil((z - zTop) * inverseCellHeight - 0.5);
-        int row = estimate < 0 ? 0 : (int) Math.min(estimate, rows);
-        while (row > 0 && rowCentre(row - 1) >= z) {
+        // clamped to [0, rows] by comparisons: cheaper than Math.min in a loop over millions of windows
+        int row = estimate < 0 ? 0 : estimate > rows ? rows : (int) estimate;
+        double[] centres = rowCentres;
+        while (row > 0 && centres[row - 1] >= z) {
             row--;
         }
-        while (row < rows && rowCentre(row) < z) {
+        while (row < rows && centres[row] < z) {
             row++;
         }
         return row;

@@ -1,6 +1,7 @@
 package org.faultbench.sim;
 
 import java.util.Arrays;
+import java.util.stream.IntStream;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.juxtaposition.ColumnIntervals;
@@ -42,6 +43,22 @@ final class LeakSearch {
     private final double[] locationDepth;
     /** Per unit slot, the depth of interest of its contacts ({@link #depthOfInterest}), kept up to date. */
     private final double[] interest;
+    /**
+     * Per unit slot, the free-water level of some point of this realisation's contacts, so at least its leak depth: a
+     * point whose level cannot reach it cannot be the leak point, and its exact threshold pressure is not needed.
+     */
+    private final double[] bound;
+    /** Per unit slot, the least level above the bound: a point at or below it may still be (or tie with) the leak. */
+    private final double[] ceiling;
+    /** Per unit slot, where the previous realisation's leak point was (fault -1 = none): the bound is sought there. */
+    private final int[] hintFault;
+    private final int[] hintColumn;
+    /** Per fault, its columns in throw order (juxtaposition only, one column for all positions). */
+    private final ThrowOrderedColumns[] byThrow;
+    /** Unit boundaries below the reference horizon and the reservoir units, of the column in use. */
+    private double[] boundaries;
+    private int[] reservoirUnits;
+    private double boundaryMagnitude;
 
     // the realisation being searched
     private RealisationInputs in;
@@ -76,6 +93,13 @@ final class LeakSearch {
         locationColumn = new int[slots];
         locationDepth = new double[slots];
         interest = new double[slots];
+        bound = new double[slots];
+        ceiling = new double[slots];
+        hintFault = new int[slots];
+        hintColumn = new int[slots];
+        Arrays.fill(hintFault, -1);
+        byThrow = juxtapositionOnly ? geometry.faults.stream().map(ThrowOrderedColumns::new)
+                .toArray(ThrowOrderedColumns[]::new) : null;
     }
 
     /**
@@ -101,11 +125,28 @@ final class LeakSearch {
         Arrays.fill(leak, Double.POSITIVE_INFINITY);
         Arrays.fill(connection, Double.POSITIVE_INFINITY);
         Arrays.fill(locationFault, -1);
+        boolean byPair = juxtapositionOnly && !columnPerPosition;
+        if (byPair) {
+            usePairColumn();
+        }
+        Arrays.fill(bound, Double.POSITIVE_INFINITY);
+        if (!juxtapositionOnly && !columnPerPosition) {
+            boundFromHints();
+        }
+        for (int s = 0; s < bound.length; s++) {
+            ceiling[s] = Math.nextUp(bound[s]);
+        }
         for (FaultPlaneFrame frame : geometry.faults) {
-            scanFault(frame);
+            if (byPair && byThrow[frame.index].realise(in, in.throwScale()[frame.index])) {
+                scanWindowsByPair(frame, byThrow[frame.index]);
+            } else {
+                scanFault(frame);
+            }
         }
         for (int s = 0; s < leak.length; s++) {
             if (locationFault[s] >= 0) {
+                hintFault[s] = locationFault[s];
+                hintColumn[s] = locationColumn[s];
                 FaultPlaneFrame frame = geometry.faults.get(locationFault[s]);
                 locations[s] = new LeakLocation(frame.bounding.id(), frame.u[locationColumn[s]], locationDepth[s]);
             }
@@ -126,6 +167,122 @@ final class LeakSearch {
             threshold.useColumn(column);
         }
         refTop = column.top(geometry.referenceUnit);
+    }
+
+    /** Takes the unit boundaries and reservoir units of the column in use for {@link #scanWindowsByPair}. */
+    private void usePairColumn() {
+        int size = hung.footwall().size();
+        if (boundaries == null || boundaries.length != size + 1) {
+            boundaries = new double[size + 1];
+            reservoirUnits = new int[(int) IntStream.range(0, size).filter(hung.footwall()::isReservoir).count()];
+        }
+        boundaryMagnitude = 0;
+        int n = 0;
+        for (int i = 0; i <= size; i++) {
+            boundaries[i] = hung.footwall().topBelowReference(i);
+            boundaryMagnitude = Math.max(boundaryMagnitude, Math.abs(boundaries[i]));
+            if (i < size && hung.footwall().isReservoir(i)) {
+                reservoirUnits[n++] = i;
+            }
+        }
+    }
+
+    /**
+     * Juxtaposition only, one column on both walls: the same windows as {@link #scanFault}, visited unit pair by unit
+     * pair over the stretch of columns, in throw order, where the pair can face each other. A window's top, base and
+     * cells do not depend on the order of the visit, and neither do the leak depth and the connection (minima); on a
+     * tie the leak location stays the one the column-by-column scan finds first, the lowest column.
+     */
+    private void scanWindowsByPair(FaultPlaneFrame frame, ThrowOrderedColumns columns) {
+        boolean onFootwall = frame.compartmentOnFootwall();
+        attic = frame.index == atticFault;
+        for (int s = 0; s < interest.length; s++) {
+            interest[s] = depthOfInterest(s);
+        }
+        double[] b = boundaries;
+        for (int i : reservoirUnits) {
+            for (int j : reservoirUnits) {
+                int s = slotOfUnit[onFootwall ? i : j];
+                // the units overlap where b[i] - b[j + 1] < throw < b[i + 1] - b[j], up to rounding
+                int first = columns.firstFrom(b[i] - b[j + 1], boundaryMagnitude);
+                int end = columns.firstAbove(b[i + 1] - b[j], boundaryMagnitude);
+                for (int p = first; p < end; p++) {
+                    double zFw = columns.footwall(p);
+                    double zHw = columns.hangingWall(p);
+                    // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
+                    double top = Math.max(zFw + b[i], zHw + b[j]);
+                    if (top > interest[s]) {
+                        continue; // a top at the depth of interest may still tie with the leak point in a lower column
+                    }
+                    double base = Math.min(zFw + b[i + 1], zHw + b[j + 1]);
+                    if (top < base) {
+                        pairWindow(frame, columns.column(p), s, top, base);
+                    }
+                }
+            }
+        }
+    }
+
+    /** {@link #juxtapositionWindow} for a window met out of column order. */
+    private void pairWindow(FaultPlaneFrame frame, int column, int s, double top, double base) {
+        if (attic) {
+            connection[s] = Math.min(connection[s], top);
+            interest[s] = depthOfInterest(s);
+        }
+        if (top < leak[s] || top == leak[s] && locationFault[s] == frame.index && column < locationColumn[s]) {
+            lowerLeak(s, top, frame, column, top);
+        }
+        if (leakRuns != null) {
+            // the windows of a column are disjoint, so their runs are too, in whatever order they come
+            leakRuns.addRun(frame.index, column, frame.firstRowCentredAtOrBelow(top),
+                    frame.firstRowCentredAtOrBelow(Math.min(base, spill[s])));
+        }
+    }
+
+    /**
+     * Fault rock: rates every point of the fault-plane columns where the previous realisation's leak points were, to
+     * bound this realisation's leak depths from above. Realisations differ little, so the bound is usually close, and
+     * the scan then works out exact threshold pressures almost only near the leak point. Where the leak point lies is
+     * still decided by the scan alone (a point at the bound is rated exactly, so ties resolve as before).
+     */
+    private void boundFromHints() {
+        for (int s = 0; s < hintFault.length; s++) {
+            boolean seen = false;
+            for (int t = 0; t < s; t++) {
+                seen |= hintFault[t] == hintFault[s] && hintColumn[t] == hintColumn[s];
+            }
+            if (hintFault[s] >= 0 && !seen) {
+                boundFromColumn(geometry.faults.get(hintFault[s]), hintColumn[s]);
+            }
+        }
+    }
+
+    /** Lowers the bounds to the free-water levels of the points of one column, rated as the scan rates them. */
+    private void boundFromColumn(FaultPlaneFrame frame, int k) {
+        double zFw = frame.footwall[k] + in.depthError(frame.x[k], frame.y[k]);
+        double throwK = in.throwScale()[frame.index] * (frame.hangingWall[k] - frame.footwall[k]);
+        double zHw = zFw + throwK;
+        if (!Double.isFinite(zFw) || !Double.isFinite(zHw)) {
+            return; // the scan reports it
+        }
+        boolean onFootwall = frame.compartmentOnFootwall();
+        hung.juxtaposeReservoirs(zFw, zHw, Double.POSITIVE_INFINITY, intervals);
+        for (int n = 0; n < intervals.count(); n++) {
+            int s = slotOfUnit[onFootwall ? intervals.footwallUnit(n) : intervals.hangingWallUnit(n)];
+            double faultThrow = throwK >= 0 ? throwK : -throwK;
+            double positionShift = refTop - (throwK >= 0 ? zFw : zHw);
+            for (double z = intervals.top(n) + INSIDE; z < intervals.base(n); z = nextSample(frame, z)) {
+                try {
+                    threshold.moveTo(z, faultThrow, z + positionShift);
+                    double level = freeWaterLevel(z, threshold.exact());
+                    if (level < bound[s]) { // never NaN: that would bar every point
+                        bound[s] = level;
+                    }
+                } catch (RuntimeException e) {
+                    // a point the criterion cannot rate gives no bound; the scan reports it if it reaches it
+                }
+            }
+        }
     }
 
     private void scanFault(FaultPlaneFrame frame) {
@@ -188,9 +345,13 @@ final class LeakSearch {
         return attic ? Math.max(depth, connection[s]) : depth;
     }
 
-    /** The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above. */
+    /**
+     * The depth of interest of one point of a contact of unit slot s: it matters only if its level may lie above, or
+     * for the leak depth, at or above the realisation's bound (which the leak depth cannot exceed).
+     */
     private double pointInterest(int s) {
-        return leakRuns != null ? Math.max(leak[s], spill[s]) : leak[s];
+        double leakCut = Math.min(leak[s], ceiling[s]);
+        return leakRuns != null ? Math.max(leakCut, spill[s]) : leakCut;
     }
 
     private void lowerLeak(int s, double level, FaultPlaneFrame frame, int column, double z) {
@@ -257,7 +418,7 @@ final class LeakSearch {
         for (double z = first; z < base && z + rise < pointInterest(s); z = nextSample(frame, z)) {
             threshold.moveTo(z, faultThrow, z + positionShift);
             double shallowest = freeWaterLevel(z, threshold.lowerBound());
-            if (shallowest < leak[s]) {
+            if (shallowest < leak[s] && shallowest < ceiling[s]) {
                 double level = freeWaterLevel(z, threshold.exact());
                 if (level < leak[s]) {
                     lowerLeak(s, level, frame, column, z);

@@ -12,6 +12,7 @@ import org.faultbench.trap.CrestFinder;
 import org.faultbench.trap.Mechanism;
 import org.faultbench.trap.SpillPoint;
 import org.faultbench.trap.SpillPointFinder;
+import org.faultbench.trap.volume.AreaDepthTable;
 import org.faultbench.trap.volume.AtticAnalysis;
 
 /**

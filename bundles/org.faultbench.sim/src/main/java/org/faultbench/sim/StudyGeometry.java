@@ -10,6 +10,7 @@ import org.faultbench.core.grid.RegularGrid;
 import org.faultbench.trap.Crest;
 import org.faultbench.trap.CrestFinder;
 import org.faultbench.trap.SpillPoint;
+import org.faultbench.trap.volume.AreaDepthTable;
 import org.faultbench.trap.SpillPointFinder;
 import org.locationtech.jts.geom.LineString;
 

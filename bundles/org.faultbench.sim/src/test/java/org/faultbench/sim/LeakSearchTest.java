@@ -13,6 +13,9 @@ import org.faultbench.core.LithologyClass;
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.core.units.PhysicalConstants;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.faults.CutOffLine;
+import org.faultbench.faults.Fault;
+import org.faultbench.faults.Wall;
 import org.faultbench.juxtaposition.ColumnIntervals;
 import org.faultbench.juxtaposition.HungColumns;
 import org.faultbench.juxtaposition.JuxtapositionClass;
@@ -61,6 +64,48 @@ class LeakSearchTest {
                 Optional.empty()));
     }
 
+    /**
+     * Juxtaposition alone visits windows unit pair by unit pair in throw order: a constant throw makes every column tie
+     * in that order, and the cone's cut-offs are symmetric about its axis, so leak points tie in depth too.
+     */
+    @Test
+    void juxtapositionOnlyWithTiedThrowsAndTiedLeakPoints() {
+        assertSameAsReference(SingleFaultDome.juxtapositionOnly(20));
+        assertSameAsReference(SingleFaultDome.juxtapositionOnly(-20));
+        assertSameAsReference(SingleFaultDome.study(20, new JuxtapositionOnlyCriterion(),
+                UncertainValue.normal(1, 0.3), Optional.empty()));
+    }
+
+    /**
+     * Footwall cut-offs all at one depth and a throw shrinking along the fault: Sand B's windows against the hanging
+     * wall's Sand A start at its footwall top in every column where they exist, so its leak points tie in depth, and
+     * throw order visits those columns against column order. The column-by-column scan keeps the first column.
+     */
+    @Test
+    void juxtapositionOnlyKeepsTheFirstColumnOfTiedLeakPointsAgainstThrowOrder() {
+        TrapStudy cone = SingleFaultDome.juxtapositionOnly(20);
+        Fault fault = cone.faults().get(0).fault();
+        CutOffLine footwall = CutOffLine.sampled(fault, "Sand A", Wall.FOOTWALL, (x, y) -> 1030, 0, 399);
+        CutOffLine hangingWall = CutOffLine.sampled(fault, "Sand A", Wall.HANGING_WALL,
+                (x, y) -> 1030 + 20 - 0.004 * y, 0, 399);
+        TrapStudy tied = new TrapStudy(cone.name(), cone.stratigraphy(), cone.referenceTop(), cone.compartment(),
+                List.of(new BoundingFault(fault, footwall, hangingWall, UncertainValue.fixed(1), 399)), cone.fluids(),
+                cone.seal(), cone.depthUncertainty(), cone.userSpillDepth(), cone.topSealCapacity(), cone.attic());
+        assertSameAsReference(tied);
+    }
+
+    /** Many sand-on-sand windows, and sands stacked without a shale between them (windows that touch). */
+    @Test
+    void juxtapositionOnlyOnManyLayersAndStackedSands() {
+        assertSameAsReference(SingleFaultDome.study(20, new JuxtapositionOnlyCriterion(),
+                UncertainValue.truncatedNormal(1, 0.6, 0, Double.POSITIVE_INFINITY), Optional.empty(), layeredColumn(),
+                new DepthUncertainty(UncertainValue.normal(0, 5), 2, 600), UncertainValue.normal(750, 20),
+                UncertainValue.fixed(1050)));
+        assertSameAsReference(SingleFaultDome.study(35, new JuxtapositionOnlyCriterion(),
+                UncertainValue.uniform(0, 2), Optional.of(new AtticSetup("F1", UncertainValue.uniform(1050, 1070))),
+                stackedSands(), DepthUncertainty.NONE, UncertainValue.normal(750, 20), UncertainValue.fixed(1050)));
+    }
+
     @Test
     void otherCriteriaTakeTheGenericPath() {
         assertSameAsReference(richDome(new ShaleSmearFactorCriterion()));
@@ -87,6 +132,20 @@ class LeakSearchTest {
             units.add(StratUnit.nonReservoir("Shale " + i, LithologyClass.SEAL, UncertainValue.normal(4, 1),
                     UncertainValue.uniform(0.5, 0.9)));
         }
+        return new Stratigraphy(units, 1);
+    }
+
+    /** Three sands on top of each other, then a shale and a fourth sand. */
+    private static Stratigraphy stackedSands() {
+        List<StratUnit> units = new ArrayList<>();
+        units.add(StratUnit.nonReservoir("Top Seal", LithologyClass.SEAL, UncertainValue.fixed(50),
+                UncertainValue.fixed(0.8)));
+        for (int i = 1; i <= 3; i++) {
+            units.add(SingleFaultDome.reservoir("Sand " + i, UncertainValue.normal(10, 3)));
+        }
+        units.add(StratUnit.nonReservoir("Shale", LithologyClass.SEAL, UncertainValue.normal(6, 2),
+                UncertainValue.fixed(0.7)));
+        units.add(SingleFaultDome.reservoir("Sand 4", UncertainValue.normal(20, 3)));
         return new Stratigraphy(units, 1);
     }
 

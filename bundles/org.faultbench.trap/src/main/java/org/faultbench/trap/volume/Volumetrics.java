@@ -15,30 +15,27 @@ import org.faultbench.core.grid.RegularGrid;
  * paraboloid volumes of the tests are met within 0.1 % on a 50 m grid and 0.001 % on a 10 m grid, so cells are not
  * subdivided. Null top nodes inside the mask hold no rock.
  * The mask should be the accumulation, e.g. {@link org.faultbench.trap.Closure} at the contact; any node of the mask
- * shallower than the contact counts.
+ * shallower than the contact counts. A column-only reservoir is summed by {@link AreaDepthTable}, which the Monte
+ * Carlo simulator uses too, so both give the same volumes.
  */
 public final class Volumetrics {
     private final double cellArea;
     private final double[] tops;
     private final double[] bases;
+    /** Column only: the sorted node depths; null with a thickness grid. */
+    private final AreaDepthTable columnOnly;
 
-    private Volumetrics(double cellArea, double[] tops, double[] bases) {
+    private Volumetrics(double cellArea, double[] tops, double[] bases, AreaDepthTable columnOnly) {
         this.cellArea = cellArea;
         this.tops = tops;
         this.bases = bases;
+        this.columnOnly = columnOnly;
     }
 
     /** A reservoir thicker than any column: only the top surface and the contact bound the rock. */
     public static Volumetrics columnOnly(RegularGrid top, GridMask mask) {
         requireGrids(top, mask);
-        int[] nodes = nodesWithTop(top, mask);
-        double[] tops = new double[nodes.length];
-        double[] bases = new double[nodes.length];
-        for (int n = 0; n < nodes.length; n++) {
-            tops[n] = top.value(nodes[n]);
-            bases[n] = Double.POSITIVE_INFINITY;
-        }
-        return new Volumetrics(top.cellArea(), tops, bases);
+        return new Volumetrics(top.cellArea(), null, null, new AreaDepthTable(top, mask));
     }
 
     /** A reservoir of the given thickness (isochore) below the top; the base clips the rock volume. */
@@ -60,7 +57,7 @@ public final class Volumetrics {
             tops[n] = top.value(nodes[n]);
             bases[n] = tops[n] + t;
         }
-        return new Volumetrics(top.cellArea(), tops, bases);
+        return new Volumetrics(top.cellArea(), tops, bases, null);
     }
 
     private static void requireGrids(RegularGrid top, GridMask mask) {
@@ -78,6 +75,9 @@ public final class Volumetrics {
     /** Rock between the top surface and {@code contactDepth}, cubic metres. */
     public double grossRockVolume(double contactDepth) {
         requireDepth("contact depth", contactDepth);
+        if (columnOnly != null) {
+            return columnOnly.grossRockVolume(0, contactDepth, Double.POSITIVE_INFINITY);
+        }
         return sum(Double.NEGATIVE_INFINITY, contactDepth);
     }
 
@@ -88,6 +88,10 @@ public final class Volumetrics {
         if (upperDepth > lowerDepth) {
             throw new IllegalArgumentException("upper depth (" + upperDepth + " m) lies below lower depth ("
                     + lowerDepth + " m)");
+        }
+        if (columnOnly != null) { // rock above the lower depth less rock above the upper one; never below 0 by rounding
+            return Math.max(0, columnOnly.grossRockVolume(0, lowerDepth, Double.POSITIVE_INFINITY)
+                    - columnOnly.grossRockVolume(0, upperDepth, Double.POSITIVE_INFINITY));
         }
         return sum(upperDepth, lowerDepth);
     }

@@ -1,4 +1,4 @@
-package org.faultbench.sim;
+package org.faultbench.trap.volume;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
