@@ -9,6 +9,10 @@ import org.faultbench.juxtaposition.JuxtapositionRaster;
 import org.faultbench.juxtaposition.paint.FaultPlaneCell;
 import org.faultbench.juxtaposition.paint.OverlayScene;
 import org.faultbench.juxtaposition.paint.PaintScene;
+import org.faultbench.seal.ClaySmearPotentialCriterion;
+import org.faultbench.seal.SealCriterion;
+import org.faultbench.seal.ShaleGougeRatioCriterion;
+import org.faultbench.seal.ShaleSmearFactorCriterion;
 import org.faultbench.sim.BoundingFault;
 import org.faultbench.sim.LeakProbabilityMap;
 import org.faultbench.sim.SealAttributePainter;
@@ -31,6 +35,8 @@ final class AllanPicture {
     final LeakProbabilityMap leak;
     /** Name of the seal attribute painted on the raster (e.g. "SGR [%]"); null for juxtaposition only. */
     final String sealAttribute;
+    private final TrapStudy study;
+    private final java.util.Map<String, String> slots = new java.util.HashMap<>();
 
     AllanPicture(TrapStudy study, BoundingFault fault, LeakProbabilityMap leak) {
         this.faultId = fault.id();
@@ -54,6 +60,41 @@ final class AllanPicture {
         this.sealAttribute = study.seal().juxtapositionOnly() ? null
                 : SealAttributePainter.paint(raster, columns, column, referenceUnit, study.seal().criterion(),
                         study.seal().burialDepth());
+        this.study = study;
+    }
+
+    /**
+     * The raster slot holding attribute {@code key} ("sgr", "ssf", "csp", "threshold"), painted the first time a
+     * painter asks for it, so the diagram's default colouring costs nothing extra; null when none could be painted.
+     */
+    private String slot(String key) {
+        return slots.computeIfAbsent(key, k -> {
+            SealCriterion criterion = switch (k) {
+            case "sgr" -> new ShaleGougeRatioCriterion();
+            case "ssf" -> new ShaleSmearFactorCriterion();
+            case "csp" -> new ClaySmearPotentialCriterion();
+            case "threshold" -> study.seal().criterion();
+            default -> null;
+            };
+            if (criterion == null) {
+                return null;
+            }
+            String attribute = SealAttributePainter.paint(raster, columns, column, referenceUnit, criterion,
+                    study.seal().burialDepth());
+            if (k.equals("threshold")) {
+                return SealAttributePainter.THRESHOLD;
+            }
+            // painting writes the threshold slot too: give it back to the study's criterion
+            SealAttributePainter.paint(raster, columns, column, referenceUnit, study.seal().criterion(),
+                    study.seal().burialDepth());
+            return attribute;
+        });
+    }
+
+    /** Attribute {@code key} at (column k, row), NaN where it was not computed. */
+    private double attribute(String key, int k, int row) {
+        String name = slot(key);
+        return name == null ? Double.NaN : raster.attribute(name)[raster.cellIndex(k, row)];
     }
 
     double uMin() {
@@ -112,7 +153,8 @@ final class AllanPicture {
     FaultPlaneCell cell(int k, int row) {
         double z = raster.rowDepth(row);
         return new FaultPlaneCell(columns.u(k), z, raster.juxtapositionClass(k, row), raster.footwallUnit(k, row),
-                raster.hangingWallUnit(k, row), raster.throwAt(k, row), attributeAt(k, row), leakProbability(k, z));
+                raster.hangingWallUnit(k, row), raster.throwAt(k, row), attributeAt(k, row), leakProbability(k, z),
+                key -> attribute(key, k, row));
     }
 
     OverlayScene overlayScene() {

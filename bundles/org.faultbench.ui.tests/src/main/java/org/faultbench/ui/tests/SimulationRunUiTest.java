@@ -67,5 +67,29 @@ class SimulationRunUiTest {
         } finally {
             image.dispose();
         }
+
+        // every seal attribute can be painted, whatever the study's own criterion
+        assertTrue(allan.colourChoices().containsAll(java.util.List.of("SGR", "SSF", "CSP", "threshold pressure")),
+                allan.colourChoices().toString());
+        for (String painter : new String[] { "sgr", "ssf", "csp", "threshold-pressure" }) {
+            assertTrue(allan.colourBy(painter), painter);
+            WorkbenchSmokeTest.spin(200);
+            Image painted = allan.snapshot();
+            try {
+                ImageData data = painted.getImageData();
+                boolean ramp = false;
+                for (int x = 0; x < data.width && !ramp; x += 2) {
+                    for (int y = 0; y < data.height && !ramp; y += 2) {
+                        RGB rgb = data.palette.getRGB(data.getPixel(x, y));
+                        // the ramp's dark end is slate: blue above red
+                        ramp = rgb.blue > rgb.red + 15 && rgb.red < 200;
+                    }
+                }
+                assertTrue(ramp, painter + " paints a ramp colour");
+            } finally {
+                painted.dispose();
+            }
+        }
+        allan.colourBy("juxtaposition");
     }
 }
