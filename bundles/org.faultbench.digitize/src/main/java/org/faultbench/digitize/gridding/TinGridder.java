@@ -27,6 +27,12 @@ import org.locationtech.jts.geom.Envelope;
 public final class TinGridder implements SurfaceGridder {
     /** Tolerance on barycentric weights for nodes on a triangle edge. */
     private static final double ON_EDGE = 1e-9;
+    /**
+     * Widening of a triangle's span on a node row, relative to the triangle's size: far more than the barycentric
+     * tolerance ON_EDGE allows, so the exact weight test below still decides and the span only skips nodes that are
+     * certainly outside (long thin triangles along contours have bounding boxes far larger than themselves).
+     */
+    private static final double SCAN_MARGIN = 1e-6;
 
     @Override
     public GriddingResult grid(GriddingInput input) {
@@ -54,8 +60,12 @@ public final class TinGridder implements SurfaceGridder {
         int jFrom = Math.max(0, (int) Math.ceil((box.getMinY() - g.y0()) / g.dy() - ON_EDGE));
         int jTo = Math.min(g.ny() - 1, (int) Math.floor((box.getMaxY() - g.y0()) / g.dy() + ON_EDGE));
         boolean nearFault = !barriers.isEmpty() && barriers.touchesTriangle(mesh.ring(t));
+        double margin = SCAN_MARGIN * (box.getWidth() + box.getHeight());
         for (int j = jFrom; j <= jTo; j++) {
-            for (int i = iFrom; i <= iTo; i++) {
+            double[] span = mesh.span(t, g.y(j));
+            int iStart = Math.max(iFrom, (int) Math.ceil((span[0] - margin - g.x0()) / g.dx()));
+            int iEnd = Math.min(iTo, (int) Math.floor((span[1] + margin - g.x0()) / g.dx()));
+            for (int i = iStart; i <= iEnd; i++) {
                 int k = g.index(i, j);
                 double[] w = done[k] ? null : mesh.weights(t, g.x(i), g.y(j));
                 if (w != null && w[0] >= -ON_EDGE && w[1] >= -ON_EDGE && w[2] >= -ON_EDGE) {
