@@ -29,8 +29,8 @@ public final class TinGridder implements SurfaceGridder {
     /** Tolerance on barycentric weights for nodes on a triangle edge. */
     private static final double ON_EDGE = 1e-9;
     /**
-     * Widening of a triangle's span on a node row, relative to the triangle's size: far more than the barycentric
-     * tolerance ON_EDGE allows, so the exact weight test below still decides and the span only skips nodes that are
+     * Widening of a triangle's span on a node row, relative to the triangle's size (plus ON_EDGE node spacings, the
+     * slack of the bounding-box test): far more than the barycentric tolerance ON_EDGE allows, so the exact weight test below still decides and the span only skips nodes that are
      * certainly outside (long thin triangles along contours have bounding boxes far larger than themselves).
      */
     private static final double SCAN_MARGIN = 1e-6;
@@ -79,7 +79,7 @@ public final class TinGridder implements SurfaceGridder {
             return;
         }
         boolean nearFault = !barriers.isEmpty() && barriers.touchesTriangle(mesh.ring(t));
-        double margin = SCAN_MARGIN * (box.getWidth() + box.getHeight());
+        double margin = SCAN_MARGIN * (box.getWidth() + box.getHeight()) + ON_EDGE * g.dx();
         for (int j = jFrom; j <= jTo; j++) {
             double[] span = mesh.span(t, g.y(j));
             int iStart = Math.max(iFrom, (int) Math.ceil((span[0] - margin - g.x0()) / g.dx()));
