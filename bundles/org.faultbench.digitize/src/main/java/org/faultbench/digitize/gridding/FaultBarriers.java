@@ -175,20 +175,40 @@ public final class FaultBarriers {
 
     /** Whether a trace or a polygon touches the closed triangle {@code ring}, so that paths inside it need testing. */
     boolean touchesTriangle(Coordinate[] ring) {
-        Polygon triangle = FACTORY.createPolygon(ring);
-        Envelope area = triangle.getEnvelopeInternal();
+        Envelope area = new Envelope(ring[0], ring[1]);
+        area.expandToInclude(ring[2]);
         for (Object candidate : traceSegments.query(area)) {
             LineSegment segment = (LineSegment) candidate;
-            if (triangle.intersects(FACTORY.createLineString(new Coordinate[] { segment.p0, segment.p1 }))) {
+            if (meetsTriangle(segment, ring)) {
                 return true;
             }
         }
+        if (polygons.isEmpty()) {
+            return false;
+        }
+        Polygon triangle = FACTORY.createPolygon(ring);
         for (Polygon polygon : polygons) {
             if (polygon.getEnvelopeInternal().intersects(area) && polygon.intersects(triangle)) {
                 return true;
             }
         }
         return false;
+    }
+
+    /**
+     * Whether a segment shares a point with the closed triangle {@code ring}: it meets an edge or lies inside. The
+     * orientation tests of {@link #meet} instead of a JTS polygon predicate, which builds a topology graph per call.
+     */
+    private static boolean meetsTriangle(LineSegment segment, Coordinate[] ring) {
+        for (int c = 0; c < 3; c++) {
+            if (meet(segment.p0, segment.p1, ring[c], ring[c + 1])) {
+                return true;
+            }
+        }
+        int first = Orientation.index(ring[0], ring[1], segment.p0);
+        int second = Orientation.index(ring[1], ring[2], segment.p0);
+        int third = Orientation.index(ring[2], ring[0], segment.p0);
+        return first != 0 && first == second && second == third;
     }
 
     /**

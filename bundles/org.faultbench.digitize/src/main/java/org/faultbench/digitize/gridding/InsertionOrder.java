@@ -34,18 +34,28 @@ final class InsertionOrder {
         for (V v : shuffled) {
             extent.expandToInclude(v.getX(), v.getY());
         }
-        Comparator<V> alongCurve = Comparator.comparingLong(v -> hilbertIndex(extent, v.getX(), v.getY()));
+        List<Keyed<V>> keyed = new ArrayList<>(shuffled.size());
+        for (V v : shuffled) {
+            keyed.add(new Keyed<>(hilbertIndex(extent, v.getX(), v.getY()), v));
+        }
+        Comparator<Keyed<V>> alongCurve = Comparator.comparingLong(Keyed::key);
         List<V> ordered = new ArrayList<>(shuffled.size());
         int start = 0;
         int end = Math.min(FIRST_ROUND, shuffled.size());
         while (start < shuffled.size()) {
-            List<V> round = new ArrayList<>(shuffled.subList(start, end));
+            List<Keyed<V>> round = new ArrayList<>(keyed.subList(start, end));
             round.sort(alongCurve);
-            ordered.addAll(round);
+            for (Keyed<V> k : round) {
+                ordered.add(k.vertex());
+            }
             start = end;
             end = Math.min(shuffled.size(), 2 * end);
         }
         return ordered;
+    }
+
+    /** A vertex with its Hilbert index, computed once rather than in every comparison of the sort. */
+    private record Keyed<V>(long key, V vertex) {
     }
 
     /** Position of (x, y) along a Hilbert curve of 2^16 &times; 2^16 cells over {@code extent}. */

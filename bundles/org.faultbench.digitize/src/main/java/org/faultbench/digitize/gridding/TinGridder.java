@@ -3,6 +3,7 @@ package org.faultbench.digitize.gridding;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.stream.IntStream;
 
 import org.faultbench.core.grid.GridGeometry;
 import org.faultbench.core.grid.RegularGrid;
@@ -27,9 +28,24 @@ import org.locationtech.jts.geom.Envelope;
 public final class TinGridder implements SurfaceGridder {
     /** Tolerance on barycentric weights for nodes on a triangle edge. */
     private static final double ON_EDGE = 1e-9;
+    /**
+     * Widening of a triangle's span on a node row, relative to the triangle's size (plus ON_EDGE node spacings, the
+     * slack of the bounding-box test): far more than the barycentric tolerance ON_EDGE allows, so the exact weight test below still decides and the span only skips nodes that are
+     * certainly outside (long thin triangles along contours have bounding boxes far larger than themselves).
+     */
+    private static final double SCAN_MARGIN = 1e-6;
 
     @Override
     public GriddingResult grid(GriddingInput input) {
+        return grid(input, Runtime.getRuntime().availableProcessors());
+    }
+
+    /**
+     * Grids with the node rows split into {@code bands} bands filled in parallel. Every band visits the triangles in
+     * the same order and a node takes the first triangle that holds it, so the surface does not depend on the number
+     * of bands.
+     */
+    GriddingResult grid(GriddingInput input, int bands) {
         if (input == null) {
             throw new IllegalArgumentException("gridding input missing");
         }
@@ -38,24 +54,37 @@ public final class TinGridder implements SurfaceGridder {
         double[] values = new double[g.size()];
         Arrays.fill(values, Double.NaN);
         boolean[] done = new boolean[g.size()];
-        for (int t = 0; t < mesh.triangleCount(); t++) {
-            fillTriangle(mesh, t, input.barriers(), g, values, done);
-        }
+        int count = Math.max(1, Math.min(bands, g.ny()));
+        IntStream.range(0, count).parallel().forEach(band -> {
+            int rowFrom = (int) ((long) g.ny() * band / count);
+            int rowTo = (int) ((long) g.ny() * (band + 1) / count) - 1;
+            for (int t = 0; t < mesh.triangleCount(); t++) {
+                fillTriangle(mesh, t, input.barriers(), g, rowFrom, rowTo, values, done);
+            }
+        });
         RegularGrid surface = new RegularGrid(g, values);
         ResidualReport residuals = ResidualReport.of(surface, input.barriers(), input.digitizedPoints());
         return new GriddingResult(surface, residuals, 0, true);
     }
 
-    private static void fillTriangle(TinMesh mesh, int t, FaultBarriers barriers, GridGeometry g, double[] values,
-            boolean[] done) {
+    /** Fills the nodes of rows {@code rowFrom..rowTo} that triangle {@code t} holds and no earlier one did. */
+    private static void fillTriangle(TinMesh mesh, int t, FaultBarriers barriers, GridGeometry g, int rowFrom,
+            int rowTo, double[] values, boolean[] done) {
         Envelope box = mesh.envelope(t);
         int iFrom = Math.max(0, (int) Math.ceil((box.getMinX() - g.x0()) / g.dx() - ON_EDGE));
         int iTo = Math.min(g.nx() - 1, (int) Math.floor((box.getMaxX() - g.x0()) / g.dx() + ON_EDGE));
-        int jFrom = Math.max(0, (int) Math.ceil((box.getMinY() - g.y0()) / g.dy() - ON_EDGE));
-        int jTo = Math.min(g.ny() - 1, (int) Math.floor((box.getMaxY() - g.y0()) / g.dy() + ON_EDGE));
+        int jFrom = Math.max(rowFrom, (int) Math.ceil((box.getMinY() - g.y0()) / g.dy() - ON_EDGE));
+        int jTo = Math.min(rowTo, (int) Math.floor((box.getMaxY() - g.y0()) / g.dy() + ON_EDGE));
+        if (jFrom > jTo || iFrom > iTo) {
+            return;
+        }
         boolean nearFault = !barriers.isEmpty() && barriers.touchesTriangle(mesh.ring(t));
+        double margin = SCAN_MARGIN * (box.getWidth() + box.getHeight()) + ON_EDGE * g.dx();
         for (int j = jFrom; j <= jTo; j++) {
-            for (int i = iFrom; i <= iTo; i++) {
+            double[] span = mesh.span(t, g.y(j));
+            int iStart = Math.max(iFrom, (int) Math.ceil((span[0] - margin - g.x0()) / g.dx()));
+            int iEnd = Math.min(iTo, (int) Math.floor((span[1] + margin - g.x0()) / g.dx()));
+            for (int i = iStart; i <= iEnd; i++) {
                 int k = g.index(i, j);
                 double[] w = done[k] ? null : mesh.weights(t, g.x(i), g.y(j));
                 if (w != null && w[0] >= -ON_EDGE && w[1] >= -ON_EDGE && w[2] >= -ON_EDGE) {

@@ -9,7 +9,6 @@ import org.faultbench.digitize.io.XyzPoint;
 import org.locationtech.jts.geom.Coordinate;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.geom.LineSegment;
-import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.index.strtree.STRtree;
 import org.locationtech.jts.triangulate.ConformingDelaunayTriangulator;
 import org.locationtech.jts.triangulate.ConstraintVertex;
@@ -48,7 +47,7 @@ final class TinMesh {
 
     /** Triangulates the control points and contours of {@code input}. */
     static TinMesh build(GriddingInput input) {
-        requireNoCrossing(input.contours());
+        ContourCrossings.requireNone(input.contours());
         STRtree contourSegments = new STRtree();
         Map<Coordinate, Double> inputDepths = new HashMap<>();
         List<ConstraintVertex> sites = new ArrayList<>();
@@ -91,24 +90,6 @@ final class TinMesh {
             throw new IllegalArgumentException("the data could not be triangulated (" + failure.getMessage()
                     + "); look for nearly coincident points near the place named, or grid by minimum curvature",
                     failure);
-        }
-    }
-
-    /** Contours of different depth may not cross or touch: the surface would need two depths at one place. */
-    private static void requireNoCrossing(List<ContourLine> contours) {
-        for (int a = 0; a < contours.size(); a++) {
-            for (int b = a + 1; b < contours.size(); b++) {
-                LineString first = contours.get(a).line();
-                LineString second = contours.get(b).line();
-                if (contours.get(a).z() != contours.get(b).z()
-                        && first.getEnvelopeInternal().intersects(second.getEnvelopeInternal())
-                        && first.intersects(second)) {
-                    Coordinate at = first.intersection(second).getCoordinate();
-                    throw new IllegalArgumentException("contours " + (a + 1) + " (" + contours.get(a).z() + " m) and "
-                            + (b + 1) + " (" + contours.get(b).z() + " m) cross near (" + at.x + ", " + at.y
-                            + "); contours of different depth may not meet");
-                }
-            }
         }
     }
 
@@ -226,6 +207,34 @@ final class TinMesh {
             e.expandToInclude(x[corner(t, c)], y[corner(t, c)]);
         }
         return e;
+    }
+
+    /**
+     * Smallest and largest x where the horizontal line at {@code row} meets triangle {@code t} (its edges and
+     * corners); a row just beyond the triangle is moved onto its top or bottom corner.
+     */
+    double[] span(int t, double row) {
+        double bottom = Math.min(y[corner(t, 0)], Math.min(y[corner(t, 1)], y[corner(t, 2)]));
+        double top = Math.max(y[corner(t, 0)], Math.max(y[corner(t, 1)], y[corner(t, 2)]));
+        double py = Math.min(top, Math.max(bottom, row));
+        double low = Double.POSITIVE_INFINITY;
+        double high = Double.NEGATIVE_INFINITY;
+        for (int c = 0; c < 3; c++) {
+            int p = corner(t, c);
+            int q = corner(t, (c + 1) % 3);
+            if (py < Math.min(y[p], y[q]) || py > Math.max(y[p], y[q])) {
+                continue;
+            }
+            if (y[p] == y[q]) {
+                low = Math.min(low, Math.min(x[p], x[q]));
+                high = Math.max(high, Math.max(x[p], x[q]));
+            } else {
+                double along = x[p] + (py - y[p]) * (x[q] - x[p]) / (y[q] - y[p]);
+                low = Math.min(low, along);
+                high = Math.max(high, along);
+            }
+        }
+        return new double[] { low, high };
     }
 
     /** Triangle {@code t} as a closed coordinate ring, for barrier tests. */

@@ -2,8 +2,10 @@ package org.faultbench.digitize.gridding;
 
 import static org.faultbench.digitize.gridding.SyntheticHorizons.FAULT_X;
 import static org.faultbench.digitize.gridding.SyntheticHorizons.GRID;
+import static org.faultbench.digitize.gridding.SyntheticHorizons.PARABOLOID;
 import static org.faultbench.digitize.gridding.SyntheticHorizons.PLANE;
 import static org.faultbench.digitize.gridding.SyntheticHorizons.STEPPED;
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -102,6 +104,17 @@ class TinGridderTest {
         }
         assertEquals(0, SyntheticHorizons.maxError(surface, PLANE, (x, y) -> 1), ROUND_OFF);
         assertFalse(Double.isNaN(surface.value(47, 50)), "node west of the polygon keeps a value");
+    }
+
+    @Test
+    void surfaceDoesNotDependOnTheNumberOfParallelBands() {
+        GriddingInput input = new GriddingInput(SyntheticHorizons.scattered(PARABOLOID, 400, 5), planeContours(),
+                SyntheticHorizons.faultTrace(), GRID);
+        double[] serial = new TinGridder().grid(input, 1).surface().values();
+        assertTrue(SyntheticHorizons.nullCount(new TinGridder().grid(input, 1).surface()) < GRID.size() / 2);
+        for (int bands : new int[] { 2, 3, 8, 101 }) {
+            assertArrayEquals(serial, new TinGridder().grid(input, bands).surface().values(), bands + " bands");
+        }
     }
 
     @Test
