@@ -88,6 +88,14 @@ public class ResultsView extends ViewPart {
         createTable(sash);
         createDistributionPane(sash);
         sash.setWeights(new int[] { 35, 65 });
+        // a wide, low view shows the table and the distributions side by side, a tall one stacks them
+        sash.addListener(SWT.Resize, e -> {
+            int orientation = sash.getSize().x > 1.6 * sash.getSize().y ? SWT.HORIZONTAL : SWT.VERTICAL;
+            if (sash.getOrientation() != orientation) {
+                sash.setOrientation(orientation);
+                sash.setWeights(orientation == SWT.HORIZONTAL ? new int[] { 50, 50 } : new int[] { 35, 65 });
+            }
+        });
         getViewSite().getActionBars().getToolBarManager().add(new RunAction());
         ActiveStudy.get().addListener(listener);
         FaultbenchPreferences.addListener(preferences);

@@ -51,7 +51,7 @@ class WorkbenchSmokeTest {
         spin(300);
         assertEquals(TrapStudyPerspective.ID, page.getPerspective().getId());
         String[] open = Arrays.stream(page.getViewReferences()).map(IViewReference::getId).toArray(String[]::new);
-        for (String id : new String[] { "org.faultbench.digitize.ui.mapSheet", "org.faultbench.faults.ui.throwProfiles",
+        for (String id : new String[] { "org.faultbench.faults.ui.throwProfiles",
                 "org.faultbench.strat.ui.stratigraphyEditor", "org.faultbench.juxtaposition.ui.allanDiagram",
                 "org.faultbench.sim.ui.results" }) {
             assertTrue(Arrays.asList(open).contains(id), id + " missing from " + Arrays.toString(open));
