@@ -3,10 +3,8 @@ package org.faultbench.digitize.ui.map;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-import org.eclipse.core.runtime.ILog;
 import org.eclipse.ui.IStartup;
 import org.eclipse.ui.IWorkbenchWindow;
-import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.PlatformUI;
 
 /**
@@ -26,11 +24,7 @@ public final class MapOnStartup implements IStartup {
             if (window == null) {
                 return;
             }
-            try {
-                window.getActivePage().openEditor(new MapSheetEditorInput(Path.of(map)), MapSheetEditor.ID);
-            } catch (PartInitException e) {
-                ILog.of(MapOnStartup.class).error("cannot open " + map, e);
-            }
+            new MapOpenJob(Path.of(map), window).schedule();
         });
     }
 }

@@ -69,7 +69,7 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
             document = opened.document();
             saveTo = opened.saveTo();
             if (document.scan().isPresent()) {
-                pyramid = ScanPyramids.build(document.scan().get());
+                pyramid = ScanPyramids.builtOrBuild(document.scan().get());
             }
         } catch (IOException | RuntimeException unreadable) {
             throw new PartInitException("Cannot open " + file + ": " + unreadable.getMessage(), unreadable);
@@ -254,5 +254,13 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
                 return;
             }
         }
+    }
+
+    @Override
+    public void dispose() {
+        if (document != null) {
+            document.scan().ifPresent(ScanPyramids::release);
+        }
+        super.dispose();
     }
 }

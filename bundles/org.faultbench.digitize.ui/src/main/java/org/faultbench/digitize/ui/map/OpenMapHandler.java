@@ -8,7 +8,6 @@ import org.eclipse.core.commands.ExecutionException;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.ui.IWorkbenchWindow;
-import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.handlers.HandlerUtil;
 
 /** File &gt; Open Map...: a scanned map image or a map-sheet file, in the map editor. */
@@ -23,11 +22,7 @@ public final class OpenMapHandler extends AbstractHandler {
         dialog.setFilterNames(new String[] { "Scanned maps and map sheets", "All files" });
         String chosen = dialog.open();
         if (chosen != null) {
-            try {
-                window.getActivePage().openEditor(new MapSheetEditorInput(Path.of(chosen)), MapSheetEditor.ID);
-            } catch (PartInitException cannotOpen) {
-                throw new ExecutionException(cannotOpen.getMessage(), cannotOpen);
-            }
+            new MapOpenJob(Path.of(chosen), window).schedule();
         }
         return null;
     }
