@@ -17,6 +17,7 @@ import org.faultbench.study.AnalysisFileReader;
 import org.faultbench.study.StudyFormatException;
 import org.faultbench.study.store.OpenedProject;
 import org.faultbench.study.store.ProjectStore;
+import org.faultbench.ui.preferences.FaultbenchPreferences;
 
 /** Reads an analysis file in the background and makes it the active study. */
 public final class StudyLoadJob extends Job {
@@ -31,7 +32,8 @@ public final class StudyLoadJob extends Job {
     @Override
     protected IStatus run(IProgressMonitor monitor) {
         try {
-            ActiveStudy.get().open(new AnalysisFileReader().read(file));
+            // a seal section without a criterion takes the user's preferred one
+            ActiveStudy.get().open(new AnalysisFileReader(FaultbenchPreferences.defaultSealCriterion()).read(file));
             return Status.OK_STATUS;
         } catch (StudyFormatException e) {
             return Status.error(e.getMessage(), e);

@@ -68,6 +68,22 @@ public final class AnalysisFileReader {
     private static final int DEFAULT_COLUMNS = 400;
     private static final double DEFAULT_CUT_OFF_OFFSET = 50;
 
+    /** Criterion id used when a file's seal section names none; null: the file must name one. */
+    private final String defaultCriterion;
+
+    /** A reader for files that name their seal criterion. */
+    public AnalysisFileReader() {
+        this(null);
+    }
+
+    /**
+     * A reader that uses {@code defaultCriterion} (e.g. the user's preference) for a seal section without a
+     * {@code criterion}; the id is then written into the study's document, so results echo it and a save keeps it.
+     */
+    public AnalysisFileReader(String defaultCriterion) {
+        this.defaultCriterion = defaultCriterion;
+    }
+
     public AnalysisFile read(Path file) throws StudyFormatException {
         byte[] bytes;
         try {
@@ -93,6 +109,7 @@ public final class AnalysisFileReader {
             throw new StudyFormatException(name, "", "is not valid JSON: " + e.getMessage(), e);
         }
         root = AnalysisFileMigrations.CHAIN.migrate(root, name);
+        applyDefaultCriterion(root);
         JsonNode doc = new JsonNode(name, "", root);
         int version = checkHeader(doc);
         Path folder = file.toAbsolutePath().getParent();
@@ -108,6 +125,14 @@ public final class AnalysisFileReader {
         }
         return new AnalysisFile(file, sha256(bytes), version, study, realisations, seed, cellHeight,
                 root.getAsJsonObject());
+    }
+
+    private void applyDefaultCriterion(JsonElement root) {
+        if (defaultCriterion != null && root.isJsonObject() && root.getAsJsonObject().has("seal")
+                && root.getAsJsonObject().get("seal").isJsonObject()
+                && !root.getAsJsonObject().getAsJsonObject("seal").has("criterion")) {
+            root.getAsJsonObject().getAsJsonObject("seal").addProperty("criterion", defaultCriterion);
+        }
     }
 
     private static int checkHeader(JsonNode doc) throws StudyFormatException {

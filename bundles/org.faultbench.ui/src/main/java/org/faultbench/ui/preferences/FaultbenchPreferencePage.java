@@ -51,7 +51,8 @@ public class FaultbenchPreferencePage extends FieldEditorPreferencePage implemen
                 .toArray(String[][]::new);
         addField(new ComboFieldEditor(FaultbenchPreferences.SEAL_CRITERION, "Default &seal criterion:",
                 criterionEntries, getFieldEditorParent()));
-        note("Offered for new studies; an analysis file's own seal.criterion always wins.");
+        note("Used for a study whose analysis file names no seal criterion (the id is then written into the file on"
+                + " save); a criterion named in the file always wins.");
         IntegerFieldEditor realisations = new IntegerFieldEditor(FaultbenchPreferences.REALISATIONS,
                 "Default &realisations:", getFieldEditorParent());
         realisations.setValidRange(1, 10_000_000);
