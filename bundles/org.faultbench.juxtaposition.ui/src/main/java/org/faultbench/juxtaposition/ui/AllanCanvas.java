@@ -19,6 +19,7 @@ import org.faultbench.juxtaposition.paint.LegendEntry;
 import org.faultbench.juxtaposition.paint.Overlay;
 import org.faultbench.juxtaposition.paint.OverlayMark;
 import org.faultbench.juxtaposition.paint.Rgb;
+import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.NumberText;
 
 /**
@@ -211,7 +212,7 @@ final class AllanCanvas extends Canvas {
             int py = y(p, line.z());
             gc.drawLine(p.x, py, p.x + p.width, py);
             // labels alternate between the left and right ends so neighbouring lines stay readable
-            String label = line.label() + " " + NumberText.of(line.z(), 1) + " m";
+            String label = line.label() + " " + DisplayUnits.current().lengthText(line.z(), 1);
             int width = gc.textExtent(label).x;
             int lx = labelled++ % 2 == 0 ? p.x + 4 : p.x + p.width - width - 4;
             gc.setBackground(getDisplay().getSystemColor(SWT.COLOR_WHITE));
@@ -241,14 +242,15 @@ final class AllanCanvas extends Canvas {
             double z = picture.zTop() + i * (picture.zBase() - picture.zTop()) / ticks;
             int py = y(p, z);
             gc.drawLine(p.x - 4, py, p.x, py);
-            gc.drawText(NumberText.of(z, 0), 4, py - 7, true);
+            gc.drawText(NumberText.of(DisplayUnits.current().length(z), 0), 4, py - 7, true);
             double u = picture.uMin() + i * (picture.uMax() - picture.uMin()) / ticks;
             int px = x(p, u);
             gc.drawLine(px, p.y + p.height, px, p.y + p.height + 4);
-            gc.drawText(NumberText.of(u, 0), px - 12, p.y + p.height + 5, true);
+            gc.drawText(NumberText.of(DisplayUnits.current().length(u), 0), px - 12, p.y + p.height + 5, true);
         }
-        gc.drawText("depth [m TVDSS]", 4, p.y + p.height + 5, true);
-        gc.drawText("distance along strike u [m] \u2014 fault " + picture.faultId
+        String symbol = DisplayUnits.current().lengthSymbol();
+        gc.drawText("depth [" + symbol + " TVDSS]", 4, p.y + p.height + 5, true);
+        gc.drawText("distance along strike u [" + symbol + "] \u2014 fault " + picture.faultId
                 + " seen from the hanging wall; solid: footwall unit tops, dashed: hanging-wall unit tops",
                 p.x + 60, p.y + p.height + 22, true);
     }

@@ -33,6 +33,7 @@ import org.faultbench.sim.UnitSummary;
 import org.faultbench.study.ActiveStudy;
 import org.faultbench.study.AnalysisFile;
 import org.faultbench.ui.CautionBanner;
+import org.faultbench.ui.preferences.FaultbenchPreferences;
 
 /**
  * The Allan diagram of a bounding fault of the active study: juxtaposition on the unrolled fault plane, reservoir
@@ -41,6 +42,16 @@ import org.faultbench.ui.CautionBanner;
  * (built-in and contributed) and the view menu every overlay.
  */
 public class AllanDiagramView extends ViewPart {
+    /** Axis labels and depth lines follow the length unit of the preferences. */
+    private final org.eclipse.jface.util.IPropertyChangeListener unitsChanged = e -> {
+        if (canvas != null && !canvas.isDisposed()) {
+            canvas.getDisplay().asyncExec(() -> {
+                if (!canvas.isDisposed()) {
+                    canvas.redraw();
+                }
+            });
+        }
+    };
     public static final String ID = "org.faultbench.juxtaposition.ui.allanDiagram";
 
     private Combo faultCombo;
@@ -97,6 +108,7 @@ public class AllanDiagramView extends ViewPart {
         }
         applyOverlays();
         ActiveStudy.get().addListener(listener);
+        FaultbenchPreferences.addListener(unitsChanged);
         reload();
     }
 
@@ -222,6 +234,7 @@ public class AllanDiagramView extends ViewPart {
     @Override
     public void dispose() {
         ActiveStudy.get().removeListener(listener);
+        FaultbenchPreferences.removeListener(unitsChanged);
         super.dispose();
     }
 

@@ -9,6 +9,7 @@ import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Canvas;
 import org.eclipse.swt.widgets.Composite;
 import org.faultbench.sim.TornadoBar;
+import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.NumberText;
 
 /**
@@ -47,8 +48,9 @@ final class TornadoCanvas extends Canvas {
                     true);
             return;
         }
-        gc.drawText("Contact of " + unit + " [m]: input at P90 (low) \u2192 P10 (high), others at median; base "
-                + NumberText.of(baseContact, 1), 6, 4, true);
+        DisplayUnits units = DisplayUnits.current();
+        gc.drawText("Contact of " + unit + " [" + units.lengthSymbol() + "]: input at P90 (low) \u2192 P10 (high),"
+                + " others at median; base " + NumberText.of(units.length(baseContact), 1), 6, 4, true);
         double min = baseContact;
         double max = baseContact;
         for (TornadoBar b : bars) {
@@ -69,8 +71,8 @@ final class TornadoCanvas extends Canvas {
             drawHalf(gc, high, baseX, left + (int) Math.round(width * (b.contactWithHighInput() - min) / span), y);
         }
         gc.drawLine(baseX, 22, baseX, 26 + bars.size() * ROW);
-        gc.drawText(NumberText.of(min, 1), left, 30 + bars.size() * ROW, true);
-        gc.drawText(NumberText.of(max, 1), left + width - 30, 30 + bars.size() * ROW, true);
+        gc.drawText(NumberText.of(units.length(min), 1), left, 30 + bars.size() * ROW, true);
+        gc.drawText(NumberText.of(units.length(max), 1), left + width - 30, 30 + bars.size() * ROW, true);
     }
 
     private static void drawHalf(GC gc, Color colour, int from, int to, int y) {
