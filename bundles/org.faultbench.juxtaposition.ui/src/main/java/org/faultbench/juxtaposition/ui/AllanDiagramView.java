@@ -43,15 +43,7 @@ import org.faultbench.ui.preferences.FaultbenchPreferences;
  */
 public class AllanDiagramView extends ViewPart {
     /** Axis labels and depth lines follow the length unit of the preferences. */
-    private final org.eclipse.jface.util.IPropertyChangeListener unitsChanged = e -> {
-        if (canvas != null && !canvas.isDisposed()) {
-            canvas.getDisplay().asyncExec(() -> {
-                if (!canvas.isDisposed()) {
-                    canvas.redraw();
-                }
-            });
-        }
-    };
+    private final org.eclipse.jface.util.IPropertyChangeListener unitsChanged = e -> redrawLater();
     public static final String ID = "org.faultbench.juxtaposition.ui.allanDiagram";
 
     private Combo faultCombo;
@@ -229,6 +221,16 @@ public class AllanDiagramView extends ViewPart {
     @Override
     public void setFocus() {
         canvas.setFocus();
+    }
+
+    private void redrawLater() {
+        if (canvas != null && !canvas.isDisposed()) {
+            canvas.getDisplay().asyncExec(() -> {
+                if (!canvas.isDisposed()) {
+                    canvas.redraw();
+                }
+            });
+        }
     }
 
     @Override
