@@ -1,7 +1,6 @@
 package org.faultbench.study;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -14,8 +13,6 @@ import java.util.Locale;
 import java.util.Optional;
 
 import com.google.gson.JsonElement;
-import com.google.gson.JsonParseException;
-import com.google.gson.JsonParser;
 
 import org.faultbench.core.LithologyClass;
 import org.faultbench.core.fluid.CapillaryScaling;
@@ -102,13 +99,7 @@ public final class AnalysisFileReader {
      */
     public AnalysisFile read(Path file, byte[] bytes) throws StudyFormatException {
         String name = file.toString();
-        JsonElement root;
-        try {
-            root = JsonParser.parseString(new String(bytes, StandardCharsets.UTF_8));
-        } catch (JsonParseException e) {
-            throw new StudyFormatException(name, "", "is not valid JSON: " + e.getMessage(), e);
-        }
-        root = AnalysisFileMigrations.CHAIN.migrate(root, name);
+        JsonElement root = AnalysisFileMigrations.CHAIN.migrate(StudyJson.parse(bytes, name), name);
         applyDefaultCriterion(root);
         JsonNode doc = new JsonNode(name, "", root);
         int version = checkHeader(doc);

@@ -11,9 +11,11 @@ import org.faultbench.study.store.AtomicFileStore;
 public final class AnalysisFileSaver {
     private final AtomicFileStore store = new AtomicFileStore();
 
-    /** Saves {@code analysis} and returns it as read back from the saved file (same content, same hash). */
-    public AnalysisFile save(AnalysisFile analysis) throws IOException, StudyFormatException {
+    /**
+     * Saves {@code analysis}. The file then holds exactly the content {@code analysis} was read from (its hash is
+     * that content's), so the caller keeps using {@code analysis} as the saved study.
+     */
+    public void save(AnalysisFile analysis) throws IOException {
         store.save(analysis.file().toAbsolutePath(), StudyEdits.content(analysis));
-        return new AnalysisFileReader().read(analysis.file());
     }
 }

@@ -38,7 +38,7 @@ public final class MigrationChain {
         }
         JsonObject doc = root.getAsJsonObject().deepCopy();
         while (version < currentVersion) {
-            doc = stepFrom(version, fileName).step().apply(doc.deepCopy());
+            doc = stepFrom(version, fileName).step().apply(doc); // doc is this method's own copy
             int reached = versionOf(doc);
             if (reached != version + 1) {
                 throw new StudyFormatException(fileName, versionField, "migration from version " + version

@@ -1,8 +1,5 @@
 package org.faultbench.study;
 
-import java.nio.charset.StandardCharsets;
-
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonPrimitive;
@@ -42,9 +39,7 @@ public final class StudyEdits {
 
     /** The analysis file's text as it would be saved: the edited JSON, pretty-printed. */
     public static byte[] content(AnalysisFile analysis) {
-        String text = new GsonBuilder().setPrettyPrinting().serializeSpecialFloatingPointValues().create()
-                .toJson(analysis.document());
-        return (text + "\n").getBytes(StandardCharsets.UTF_8);
+        return StudyJson.pretty(analysis.document());
     }
 
     private static AnalysisFile withUnitField(AnalysisFile analysis, int unitIndex, String key, JsonElement value)
@@ -53,13 +48,7 @@ public final class StudyEdits {
         JsonObject unit = document.getAsJsonObject("stratigraphy").getAsJsonArray("units").get(unitIndex)
                 .getAsJsonObject();
         unit.add(key, value);
-        return reread(analysis, document);
-    }
-
-    private static AnalysisFile reread(AnalysisFile analysis, JsonObject document) throws StudyFormatException {
-        AnalysisFile edited = new AnalysisFile(analysis.file(), analysis.sha256(), analysis.formatVersion(),
-                analysis.study(), analysis.realisations(), analysis.seed(), analysis.cellHeight(), document);
-        return new AnalysisFileReader().read(analysis.file(), content(edited));
+        return new AnalysisFileReader().read(analysis.file(), StudyJson.pretty(document));
     }
 
     private static String unitField(int unitIndex, String key) {

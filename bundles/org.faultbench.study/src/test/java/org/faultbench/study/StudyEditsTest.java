@@ -71,10 +71,12 @@ class StudyEditsTest {
         AnalysisFile original = dome();
         byte[] before = Files.readAllBytes(original.file());
         AnalysisFile edited = StudyEdits.withUnitProperty(original, 0, UnitProperty.VCL, UncertainValue.fixed(0.66));
-        AnalysisFile saved = new AnalysisFileSaver().save(edited);
+        new AnalysisFileSaver().save(edited);
+        AnalysisFile saved = new AnalysisFileReader().read(original.file());
         assertEquals(UncertainValue.fixed(0.66), saved.study().stratigraphy().units().get(0).clayFraction());
         assertEquals(new String(before), Files.readString(original.file().resolveSibling(
                 original.file().getFileName() + ".bak")), "the previous version is kept as .bak");
-        assertEquals(saved.sha256(), AnalysisFileReader.sha256(Files.readAllBytes(original.file())));
+        assertEquals(edited.sha256(), AnalysisFileReader.sha256(Files.readAllBytes(original.file())),
+                "the saved file holds exactly the edited study's content, so the editor keeps it as the saved study");
     }
 }
