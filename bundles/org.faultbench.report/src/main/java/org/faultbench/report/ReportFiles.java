@@ -2,11 +2,11 @@ package org.faultbench.report;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.util.Comparator;
-import java.util.stream.Stream;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+import org.faultbench.study.StagedOutput;
 
 /**
  * A rendered report, held in memory until written: {@code report.html} (self-contained, images as data: URIs)
@@ -24,28 +24,11 @@ public record ReportFiles(String html, byte[] pdf) {
         return new ReportFiles(new HtmlReportWriter().write(report), new PdfReportWriter().write(report));
     }
 
+    /** Writes both files into {@code outDir}, all or nothing, as the results are written. */
     public void writeTo(Path outDir) throws IOException {
-        Path absolute = outDir.toAbsolutePath();
-        Files.createDirectories(absolute.getParent());
-        Path staging = Files.createTempDirectory(absolute.getParent(), ".faultbench-report-");
-        try {
-            Files.writeString(staging.resolve(HTML_FILE), html, StandardCharsets.UTF_8);
-            Files.write(staging.resolve(PDF_FILE), pdf);
-            Files.createDirectories(absolute);
-            for (String name : new String[] { HTML_FILE, PDF_FILE }) {
-                Files.move(staging.resolve(name), absolute.resolve(name), StandardCopyOption.REPLACE_EXISTING,
-                        StandardCopyOption.ATOMIC_MOVE);
-            }
-        } finally {
-            deleteQuietly(staging);
-        }
-    }
-
-    private static void deleteQuietly(Path dir) {
-        try (Stream<Path> walk = Files.walk(dir)) {
-            walk.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
-        } catch (IOException e) {
-            // the staging folder is hidden and temporary; leaving it behind is harmless
-        }
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        files.put(HTML_FILE, html.getBytes(StandardCharsets.UTF_8));
+        files.put(PDF_FILE, pdf);
+        StagedOutput.write(outDir, files);
     }
 }

@@ -1,17 +1,13 @@
 package org.faultbench.study;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
-import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.stream.Stream;
 
 import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
@@ -53,47 +49,22 @@ public final class ResultsWriter {
     }
 
     public void write(AnalysisFile analysis, SimulationResult result, Path outDir) throws IOException {
-        Path absolute = outDir.toAbsolutePath();
-        Files.createDirectories(absolute.getParent());
-        Path staging = Files.createTempDirectory(absolute.getParent(), ".faultbench-out-");
-        try {
-            Files.writeString(staging.resolve("results.json"),
-                    new GsonBuilder().setPrettyPrinting().serializeSpecialFloatingPointValues().create()
-                            .toJson(resultsJson(analysis, result)),
-                    StandardCharsets.UTF_8);
-            Files.writeString(staging.resolve("summary.csv"), summaryCsv(result), StandardCharsets.UTF_8);
-            for (LeakProbabilityMap map : result.leakMaps()) {
-                Files.writeString(staging.resolve("leak-probability-" + safe(map.faultId()) + ".csv"), leakCsv(map),
-                        StandardCharsets.UTF_8);
-            }
-            Files.createDirectories(absolute);
-            try (Stream<Path> files = Files.list(staging)) {
-                for (Path f : files.toList()) {
-                    Files.move(f, absolute.resolve(f.getFileName()), StandardCopyOption.REPLACE_EXISTING,
-                            StandardCopyOption.ATOMIC_MOVE);
-                }
-            }
-        } finally {
-            deleteQuietly(staging);
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        files.put("results.json", utf8(new GsonBuilder().setPrettyPrinting().serializeSpecialFloatingPointValues()
+                .create().toJson(resultsJson(analysis, result))));
+        files.put("summary.csv", utf8(summaryCsv(result)));
+        for (LeakProbabilityMap map : result.leakMaps()) {
+            files.put("leak-probability-" + safe(map.faultId()) + ".csv", utf8(leakCsv(map)));
         }
+        StagedOutput.write(outDir, files);
+    }
+
+    private static byte[] utf8(String text) {
+        return text.getBytes(StandardCharsets.UTF_8);
     }
 
     private static String safe(String id) {
         return id.replaceAll("[^A-Za-z0-9._-]", "_");
-    }
-
-    private static void deleteQuietly(Path dir) {
-        try (Stream<Path> walk = Files.walk(dir)) {
-            walk.sorted(Comparator.reverseOrder()).forEach(p -> {
-                try {
-                    Files.deleteIfExists(p);
-                } catch (IOException e) {
-                    throw new UncheckedIOException(e);
-                }
-            });
-        } catch (IOException | UncheckedIOException e) {
-            // the staging folder is hidden and temporary; leaving it behind is harmless
-        }
     }
 
     JsonObject resultsJson(AnalysisFile analysis, SimulationResult result) {
