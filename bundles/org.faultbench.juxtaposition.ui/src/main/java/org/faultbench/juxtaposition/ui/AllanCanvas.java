@@ -202,6 +202,7 @@ final class AllanCanvas extends Canvas {
                         mark.dashed() ? SWT.LINE_DASH : SWT.LINE_SOLID));
             }
         }
+        DisplayUnits units = DisplayUnits.current();
         for (DepthLine line : all) {
             if (!Double.isFinite(line.z()) || line.z() < picture.zTop() || line.z() > picture.zBase()) {
                 continue;
@@ -212,7 +213,7 @@ final class AllanCanvas extends Canvas {
             int py = y(p, line.z());
             gc.drawLine(p.x, py, p.x + p.width, py);
             // labels alternate between the left and right ends so neighbouring lines stay readable
-            String label = line.label() + " " + DisplayUnits.current().lengthText(line.z(), 1);
+            String label = line.label() + " " + units.lengthText(line.z(), 1);
             int width = gc.textExtent(label).x;
             int lx = labelled++ % 2 == 0 ? p.x + 4 : p.x + p.width - width - 4;
             gc.setBackground(getDisplay().getSystemColor(SWT.COLOR_WHITE));
@@ -235,6 +236,7 @@ final class AllanCanvas extends Canvas {
     }
 
     private void drawAxes(GC gc, Rectangle p) {
+        DisplayUnits units = DisplayUnits.current();
         gc.setForeground(getDisplay().getSystemColor(SWT.COLOR_BLACK));
         gc.drawRectangle(p);
         int ticks = 5;
@@ -242,13 +244,13 @@ final class AllanCanvas extends Canvas {
             double z = picture.zTop() + i * (picture.zBase() - picture.zTop()) / ticks;
             int py = y(p, z);
             gc.drawLine(p.x - 4, py, p.x, py);
-            gc.drawText(NumberText.of(DisplayUnits.current().length(z), 0), 4, py - 7, true);
+            gc.drawText(NumberText.of(units.length(z), 0), 4, py - 7, true);
             double u = picture.uMin() + i * (picture.uMax() - picture.uMin()) / ticks;
             int px = x(p, u);
             gc.drawLine(px, p.y + p.height, px, p.y + p.height + 4);
-            gc.drawText(NumberText.of(DisplayUnits.current().length(u), 0), px - 12, p.y + p.height + 5, true);
+            gc.drawText(NumberText.of(units.length(u), 0), px - 12, p.y + p.height + 5, true);
         }
-        String symbol = DisplayUnits.current().lengthSymbol();
+        String symbol = units.lengthSymbol();
         gc.drawText("depth [" + symbol + " TVDSS]", 4, p.y + p.height + 5, true);
         gc.drawText("distance along strike u [" + symbol + "] \u2014 fault " + picture.faultId
                 + " seen from the hanging wall; solid: footwall unit tops, dashed: hanging-wall unit tops",
