@@ -27,7 +27,7 @@ import org.faultbench.faults.profile.ThrowProfileFitter;
 import org.faultbench.faults.profile.ThrowProfileModel;
 import org.faultbench.faults.qc.QcFinding;
 import org.faultbench.study.ActiveStudy;
-import org.faultbench.ui.NumberText;
+import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.plot.PlotAxis;
 import org.faultbench.ui.plot.PlotCanvas;
 import org.faultbench.ui.plot.PlotSeries;
@@ -163,19 +163,28 @@ public class ThrowProfileView extends ViewPart {
             series.add(new PlotSeries("selected", new double[] { pickedU }, new double[] { 0 }, PICKED,
                     PlotSeries.Style.VERTICAL_MARKERS));
         }
+        DisplayUnits units = DisplayUnits.current();
         double min = Math.min(0, min(profile.validThrows()));
         double max = Math.max(0, max(profile.validThrows()));
-        plot.show(PlotAxis.linear("distance along strike (m)", 0, fault.length()),
-                PlotAxis.linear("throw (m)", min, max), false, series);
-        readout.setText(Labels.escape(fault.name() + ": length " + NumberText.of(fault.length(), 0) + " m, max |throw| "
-                + NumberText.of(profile.maxAbsThrow(), 1) + " m. " + fitText + "  " + findings.size()
+        plot.show(PlotAxis.linear("distance along strike (" + units.lengthSymbol() + ")", 0, units.length(fault.length())),
+                PlotAxis.linear("throw (" + units.lengthSymbol() + ")", units.length(min), units.length(max)), false,
+                series.stream().map(p -> inDisplayUnits(p, units)).toList());
+        readout.setText(Labels.escape(fault.name() + ": length " + units.lengthText(fault.length(), 0) + ", max |throw| "
+                + units.lengthText(profile.maxAbsThrow(), 1) + ". " + fitText + "  " + findings.size()
                 + " QC finding(s)" + (findings.isEmpty() ? "." : ": " + findings.get(0).message())));
         readout.getParent().layout(true);
     }
 
     private static String fitText(ProfileFit fit) {
-        return "Best fit: " + fit.model().name() + ", Dmax " + NumberText.of(fit.maxThrow(), 1) + " m, tip to tip "
-                + NumberText.of(fit.length(), 0) + " m.";
+        DisplayUnits units = DisplayUnits.current();
+        return "Best fit: " + fit.model().name() + ", Dmax " + units.lengthText(fit.maxThrow(), 1) + ", tip to tip "
+                + units.lengthText(fit.length(), 0) + ".";
+    }
+
+    /** Both axes of a throw profile are lengths: the series as shown in the preferred length unit. */
+    private static PlotSeries inDisplayUnits(PlotSeries series, DisplayUnits units) {
+        return new PlotSeries(series.name(), java.util.Arrays.stream(series.x()).map(units::length).toArray(),
+                java.util.Arrays.stream(series.y()).map(units::length).toArray(), series.colour(), series.style());
     }
 
     private String fitSeries(ThrowProfile profile, List<PlotSeries> series) {

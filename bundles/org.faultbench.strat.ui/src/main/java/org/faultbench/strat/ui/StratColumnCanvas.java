@@ -9,6 +9,7 @@ import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Canvas;
 import org.eclipse.swt.widgets.Composite;
 import org.faultbench.strat.StratUnit;
+import org.faultbench.ui.DisplayUnits;
 import org.faultbench.ui.NumberText;
 
 /**
@@ -56,6 +57,7 @@ final class StratColumnCanvas extends Canvas {
             referenceTop += units.get(i).thickness().nominal();
         }
         gc.setAntialias(SWT.ON);
+        DisplayUnits display = DisplayUnits.current();
         for (int i = 0; i < units.size(); i++) {
             StratUnit unit = units.get(i);
             double thickness = unit.thickness().nominal();
@@ -66,10 +68,10 @@ final class StratColumnCanvas extends Canvas {
             gc.setForeground(getDisplay().getSystemColor(SWT.COLOR_BLACK));
             String label = unit.name() + (i == referenceIndex ? "  \u25C0 mapped top" : "");
             gc.drawText(label, x + COLUMN_WIDTH + 14, (y0 + y1) / 2 - gc.getFontMetrics().getHeight() / 2, true);
-            gc.drawText(NumberText.of(top - referenceTop, 0), area.x + MARGIN, y0 - 6, true);
+            gc.drawText(NumberText.of(display.length(top - referenceTop), 0), area.x + MARGIN, y0 - 6, true);
             top += thickness;
         }
-        gc.drawText(NumberText.of(top - referenceTop, 0) + " m", area.x + MARGIN,
+        gc.drawText(display.lengthText(top - referenceTop, 0), area.x + MARGIN,
                 MARGIN + (int) Math.round(top * scale) - 6, true);
     }
 
