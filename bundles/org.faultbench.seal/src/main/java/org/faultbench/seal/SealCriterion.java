@@ -35,6 +35,18 @@ public interface SealCriterion {
         return this;
     }
 
+    /**
+     * This criterion for one Monte Carlo realisation, given what the realisation drew for the contributed sampled
+     * inputs that act on the criterion (extension point {@code org.faultbench.sim.sampledInputs}, target
+     * {@code criterion}). Returns a new instance when a value changes a setting, since one instance is shared; the
+     * default ignores the values. Inputs absent from {@code values} leave the criterion's own setting.
+     *
+     * @throws IllegalArgumentException when a value is outside what the setting accepts
+     */
+    default SealCriterion forRealisation(SampledValues values) {
+        return this;
+    }
+
     /** One warning for each unit in the throw window whose lithology the criterion is not valid for. */
     default List<ApplicabilityWarning> applicabilityWarnings(FaultPointContext ctx) {
         ThrowWindow window = ThrowWindow.of(ctx);

@@ -15,6 +15,12 @@ public final class ShaleSmearFactorCriterion extends ClayBasedCriterion {
     /** Largest SSF still taken as a continuous smear by default (Gibson 1994). */
     public static final double DEFAULT_MAXIMUM_SEALING_SSF = 4;
 
+    /**
+     * Id of the sampled input that, when a study includes it, draws the maximum sealing SSF per realisation instead
+     * of the fixed setting (the input itself is contributed by the simulator bundle).
+     */
+    public static final String SAMPLED_MAXIMUM_ID = "ssf-maximum-sealing";
+
     private final double maximumSealingSsf;
 
     public ShaleSmearFactorCriterion() {
@@ -31,6 +37,13 @@ public final class ShaleSmearFactorCriterion extends ClayBasedCriterion {
 
     public double maximumSealingSsf() {
         return maximumSealingSsf;
+    }
+
+    /** With the realisation's maximum sealing SSF when the study samples {@value #SAMPLED_MAXIMUM_ID}. */
+    @Override
+    public SealCriterion forRealisation(SampledValues values) {
+        var drawn = values.value(SAMPLED_MAXIMUM_ID);
+        return drawn.isPresent() ? new ShaleSmearFactorCriterion(drawn.getAsDouble()) : this;
     }
 
     @Override

@@ -5,7 +5,10 @@ import static org.faultbench.seal.TestColumns.point;
 import static org.faultbench.seal.TestColumns.sand;
 import static org.faultbench.seal.TestColumns.shale;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import java.util.Map;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.junit.jupiter.api.Test;
@@ -52,5 +55,17 @@ class ShaleSmearFactorCriterionTest {
         assertThrows(IllegalArgumentException.class, () -> new ShaleSmearFactorCriterion(0));
         assertThrows(IllegalArgumentException.class, () -> new ShaleSmearFactorCriterion(Double.NaN));
         assertEquals(4, new ShaleSmearFactorCriterion().maximumSealingSsf(), 0);
+    }
+
+    @Test
+    void aRealisationMayDrawItsOwnLimit() {
+        ShaleSmearFactorCriterion fixed = new ShaleSmearFactorCriterion();
+        assertSame(fixed, fixed.forRealisation(SampledValues.NONE), "no drawn value: the fixed limit");
+        assertSame(fixed, fixed.forRealisation(SampledValues.of(Map.of("other-input", 9.0))));
+        SealCriterion drawn = fixed.forRealisation(SampledValues.of(Map.of(
+                ShaleSmearFactorCriterion.SAMPLED_MAXIMUM_ID, 6.5)));
+        assertEquals(6.5, ((ShaleSmearFactorCriterion) drawn).maximumSealingSsf(), 0);
+        assertEquals(4, fixed.maximumSealingSsf(), 0, "the shared instance keeps its setting");
+        assertThrows(IllegalArgumentException.class, () -> SampledValues.of(Map.of("x", Double.NaN)));
     }
 }

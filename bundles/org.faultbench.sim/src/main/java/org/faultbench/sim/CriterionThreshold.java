@@ -2,15 +2,23 @@ package org.faultbench.sim;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.seal.FaultPointContext;
+import org.faultbench.seal.SealCriterion;
 
 /** Any seal criterion, evaluated at every point it is moved to; its bounds are the exact value. */
 final class CriterionThreshold implements PointThreshold {
     private final SealSetup seal;
+    private SealCriterion criterion;
     private ResolvedColumn column;
     private double pressure;
 
     CriterionThreshold(SealSetup seal) {
         this.seal = seal;
+        this.criterion = seal.criterion();
+    }
+
+    @Override
+    public void useCriterion(SealCriterion realisationCriterion) {
+        this.criterion = realisationCriterion;
     }
 
     @Override
@@ -25,7 +33,7 @@ final class CriterionThreshold implements PointThreshold {
 
     /** The criterion's threshold pressure at a point of the column. */
     double at(double depth, double faultThrow, double position) {
-        return seal.criterion().evaluate(new FaultPointContext(depth, faultThrow, position, column, seal.burialDepth()))
+        return criterion.evaluate(new FaultPointContext(depth, faultThrow, position, column, seal.burialDepth()))
                 .thresholdPressure();
     }
 

@@ -2,11 +2,14 @@ package org.faultbench.sim;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.apache.commons.math3.random.RandomGenerator;
 import org.faultbench.core.grid.GridGeometry;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.seal.SampledValues;
 import org.faultbench.strat.ColumnDraw;
 import org.faultbench.strat.StratUnit;
 
@@ -17,7 +20,9 @@ import org.faultbench.strat.StratUnit;
  *
  * <p>Order: depth shift; throw scale per fault; brine density; trapped-fluid density; calibration shift; user spill
  * depth, top-seal capacity and drainage depth when the study has them; per unit thickness and Vcl; per unit N/G,
- * porosity, Sw and Bo; then the residual depth field's lattice (not labelled: it is not a tornado input).
+ * porosity, Sw and Bo; the study's contributed sampled inputs in the study's order (none: the draws of a study
+ * without them are unchanged); then the residual depth field's lattice (not labelled: it is not a tornado input).
+ * Contributed values act after all draws, on the target each declares ({@link InputTarget}).
  */
 public final class InputSampler {
     private final TrapStudy study;
@@ -53,6 +58,9 @@ public final class InputSampler {
             names.add("Sw of " + unit.name());
             names.add("Bo of " + unit.name());
         }
+        for (ContributedInput c : study.contributedInputs()) {
+            names.add(c.input().name());
+        }
         return names;
     }
 
@@ -75,6 +83,17 @@ public final class InputSampler {
         double drainage = optional(study.attic().map(AtticSetup::drainageDepth).orElse(null), rng);
         ColumnDraw columns = study.stratigraphy().sampleDraw(rng);
         var properties = study.stratigraphy().sampleReservoirProperties(rng);
+        List<ContributedInput> contributed = study.contributedInputs();
+        Map<String, Double> criterionValues = contributed.isEmpty() ? Map.of() : new HashMap<>();
+        for (ContributedInput c : contributed) {
+            double value = c.distribution().sample(rng);
+            switch (c.target()) {
+                case DEPTH_SHIFT -> shift += value;
+                case THROW_SCALE -> scaleAll(throwScale, value);
+                case THRESHOLD_LOG_SHIFT -> calibration += value;
+                case CRITERION -> criterionValues.put(c.id(), value);
+            }
+        }
         CorrelatedResidualField residual = null;
         DepthUncertainty depth = study.depthUncertainty();
         if (depth.hasResidual()) {
@@ -82,7 +101,13 @@ public final class InputSampler {
                     depth.correlationLength(), depth.residualStandardDeviation(), rng);
         }
         return new RealisationInputs(shift, throwScale, brine, hydrocarbon, calibration, spill, topSeal, drainage,
-                columns.representative(), properties, residual, columns);
+                columns.representative(), properties, residual, columns, SampledValues.of(criterionValues));
+    }
+
+    private static void scaleAll(double[] throwScale, double factor) {
+        for (int f = 0; f < throwScale.length; f++) {
+            throwScale[f] *= factor;
+        }
     }
 
     private static double optional(UncertainValue value, RandomGenerator rng) {

@@ -6,6 +6,7 @@ import java.util.stream.IntStream;
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.juxtaposition.ColumnIntervals;
 import org.faultbench.juxtaposition.HungColumns;
+import org.faultbench.seal.SealCriterion;
 
 /**
  * Searches the bounding faults of one realisation for each reservoir unit's leak point: the shallowest free-water
@@ -116,6 +117,11 @@ final class LeakSearch {
         this.in = in;
         this.columnPerPosition = in.columns() != null && in.columns().variesWithPosition();
         useColumn(in.column());
+        if (threshold != null) {
+            SealCriterion studyCriterion = geometry.study.seal().criterion();
+            threshold.useCriterion(in.criterionValues().isEmpty() ? studyCriterion
+                    : studyCriterion.forRealisation(in.criterionValues()));
+        }
         this.buoyancyPerMetre = buoyancyPerMetre;
         this.thresholdFactor = geometry.study.seal().thresholdScale() * Math.pow(10, -in.calibrationShift());
         this.spill = spill;

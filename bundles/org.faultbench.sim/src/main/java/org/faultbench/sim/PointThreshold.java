@@ -1,6 +1,7 @@
 package org.faultbench.sim;
 
 import org.faultbench.core.column.ResolvedColumn;
+import org.faultbench.seal.SealCriterion;
 import org.faultbench.seal.ShaleGougeRatioCriterion;
 
 /**
@@ -15,6 +16,13 @@ interface PointThreshold {
 
     /** The column of the realisation whose points follow. */
     void useColumn(ResolvedColumn column);
+
+    /**
+     * The criterion of the realisation whose points follow ({@code SealCriterion.forRealisation} of the study's
+     * criterion); until called, the study's criterion. Fast paths for built-in criteria that take no contributed
+     * values keep their own arithmetic.
+     */
+    void useCriterion(SealCriterion realisationCriterion);
 
     /**
      * Moves to the point {@code new FaultPointContext(depth, faultThrow, position, column, burialDepth)} of the

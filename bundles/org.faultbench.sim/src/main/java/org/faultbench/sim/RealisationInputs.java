@@ -4,6 +4,7 @@ import java.util.List;
 
 import org.faultbench.core.column.ReservoirProperties;
 import org.faultbench.core.column.ResolvedColumn;
+import org.faultbench.seal.SampledValues;
 import org.faultbench.strat.ColumnDraw;
 
 /**
@@ -21,11 +22,12 @@ import org.faultbench.strat.ColumnDraw;
  * @param reservoirProperties per unit, column order
  * @param residual the correlated depth residual, null when the study has none
  * @param columns the stratigraphy draws, resolving the column of each map position (isochores)
+ * @param criterionValues values of the contributed sampled inputs that act on the seal criterion, by id
  */
 public record RealisationInputs(double depthShift, double[] throwScale, double brineDensity, double hydrocarbonDensity,
         double calibrationShift, double userSpillDepth, double topSealCapacity, double drainageDepth,
         ResolvedColumn column, List<ReservoirProperties> reservoirProperties, CorrelatedResidualField residual,
-        ColumnDraw columns) {
+        ColumnDraw columns, SampledValues criterionValues) {
 
     /** Depth error at (x, y): the common shift plus the residual there. */
     public double depthError(double x, double y) {

@@ -1,5 +1,6 @@
 package org.faultbench.sim;
 
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -8,25 +9,39 @@ import org.eclipse.core.runtime.IConfigurationElement;
 import org.faultbench.core.extension.ContributionReader;
 
 /**
- * Reads the {@value #POINT} extension point. What is left: InputSampler must draw one value per contributed input
- * per realisation (from the realisation's own random stream, so results stay reproducible and thread-count
- * independent), RealisationInputs must carry them by id, the tornado must rank them, and a criterion must be able to
- * read them (e.g. through FaultPointContext). Until then the catalog only validates and lists contributions.
+ * Reads the {@value #POINT} extension point. A contribution is skipped (and logged with its bundle's id) when its id
+ * is missing or taken, its class cannot be created, or it gives no distribution, no target, or a distribution its own
+ * bounds reject.
  */
 public final class SampledInputContributions {
 
     public static final String POINT = "org.faultbench.sim.sampledInputs";
     private static final ContributionReader READER = new ContributionReader("sampled input", "input");
+    private static Map<String, SampledInput> platformInputs;
 
     private SampledInputContributions() {
     }
 
-    /** The valid contributions of the running platform by id (none outside OSGi). */
-    public static Map<String, SampledInput> platformInputs() {
+    /** The inputs that come with the simulator, by id. */
+    public static Map<String, SampledInput> builtIns() {
         Map<String, SampledInput> inputs = new LinkedHashMap<>();
-        ContributionReader.log(SampledInputContributions.class,
-                readInto(inputs, ContributionReader.platformElements(POINT)));
+        SampledInput ssf = new MaximumSealingSsfInput();
+        inputs.put(ssf.id(), ssf);
         return inputs;
+    }
+
+    /**
+     * The inputs a study may name: the built-ins plus every valid contribution of the running platform, by id (just
+     * the built-ins outside OSGi). Read once.
+     */
+    public static synchronized Map<String, SampledInput> platformInputs() {
+        if (platformInputs == null) {
+            Map<String, SampledInput> inputs = builtIns();
+            ContributionReader.log(SampledInputContributions.class,
+                    readInto(inputs, ContributionReader.platformElements(POINT)));
+            platformInputs = Collections.unmodifiableMap(inputs);
+        }
+        return platformInputs;
     }
 
     /** Adds every valid contribution by id; returns one message per skipped contribution. */
@@ -36,6 +51,13 @@ public final class SampledInputContributions {
             if (input.distribution() == null) {
                 throw new IllegalArgumentException("distribution() returned nothing");
             }
+            if (input.target() == null) {
+                throw new IllegalArgumentException("target() returned nothing");
+            }
+            if (input.bounds() == null) {
+                throw new IllegalArgumentException("bounds() returned nothing");
+            }
+            ContributedInput.withDefault(input); // its own distribution must fit its bounds
             if (inputs.containsKey(c.id())) {
                 throw new IllegalArgumentException("id '" + c.id() + "' is already registered");
             }

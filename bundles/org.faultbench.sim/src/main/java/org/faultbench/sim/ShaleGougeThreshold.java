@@ -2,6 +2,7 @@ package org.faultbench.sim;
 
 import org.faultbench.core.column.ResolvedColumn;
 import org.faultbench.seal.BretanCapacity;
+import org.faultbench.seal.SealCriterion;
 import org.faultbench.seal.ShaleGougeRatioCriterion;
 import org.faultbench.seal.SgrPressureModel;
 
@@ -60,6 +61,12 @@ final class ShaleGougeThreshold implements PointThreshold {
         // to pascals never turn a larger SGR into a smaller pressure
         this.brackets = pressureModel instanceof BretanCapacity ? new SgrPressureBrackets(pressureModel, burialDepth)
                 : null;
+    }
+
+    /** Passed on to the general path; the shale gouge ratio takes no contributed values. */
+    @Override
+    public void useCriterion(SealCriterion realisationCriterion) {
+        criterion.useCriterion(realisationCriterion);
     }
 
     @Override

@@ -26,10 +26,12 @@ import org.locationtech.jts.geom.Polygon;
  * @param userSpillDepth a spill depth entered by the user instead of the computed one
  * @param topSealCapacity capillary capacity of the top seal, Pa
  * @param attic the drained neighbour, for the attic analysis
+ * @param contributedInputs plug-in sampled inputs the study includes, in draw order (ids unique)
  */
 public record TrapStudy(String name, Stratigraphy stratigraphy, RegularGrid referenceTop, Polygon compartment,
         List<BoundingFault> faults, FluidContrast fluids, SealSetup seal, DepthUncertainty depthUncertainty,
-        Optional<UncertainValue> userSpillDepth, Optional<UncertainValue> topSealCapacity, Optional<AtticSetup> attic) {
+        Optional<UncertainValue> userSpillDepth, Optional<UncertainValue> topSealCapacity, Optional<AtticSetup> attic,
+        List<ContributedInput> contributedInputs) {
 
     public TrapStudy {
         if (stratigraphy == null || referenceTop == null || compartment == null || fluids == null || seal == null) {
@@ -53,9 +55,25 @@ public record TrapStudy(String name, Stratigraphy stratigraphy, RegularGrid refe
                         + "', which does not bound the compartment");
             }
         });
+        contributedInputs = List.copyOf(contributedInputs == null ? List.of() : contributedInputs);
+        Set<String> inputIds = new HashSet<>();
+        for (ContributedInput c : contributedInputs) {
+            if (!inputIds.add(c.id())) {
+                throw new IllegalArgumentException("sampled input '" + c.id() + "' is included twice");
+            }
+        }
         if (stratigraphy.units().stream().noneMatch(u -> u.reservoir())) {
             throw new IllegalArgumentException("the stratigraphy has no reservoir unit to analyse");
         }
+    }
+
+    /** A study without contributed sampled inputs. */
+    public TrapStudy(String name, Stratigraphy stratigraphy, RegularGrid referenceTop, Polygon compartment,
+            List<BoundingFault> faults, FluidContrast fluids, SealSetup seal, DepthUncertainty depthUncertainty,
+            Optional<UncertainValue> userSpillDepth, Optional<UncertainValue> topSealCapacity,
+            Optional<AtticSetup> attic) {
+        this(name, stratigraphy, referenceTop, compartment, faults, fluids, seal, depthUncertainty, userSpillDepth,
+                topSealCapacity, attic, List.of());
     }
 
     public String name() {

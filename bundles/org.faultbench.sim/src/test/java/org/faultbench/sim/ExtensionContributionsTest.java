@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.faultbench.core.extension.ElementStub;
+import org.faultbench.core.uncertain.Bounds;
 import org.faultbench.core.uncertain.UncertainValue;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -31,7 +32,11 @@ class ExtensionContributionsTest {
         }
     }
 
-    record Shift(String id, UncertainValue distribution) implements SampledInput {
+    record Shift(String id, UncertainValue distribution, InputTarget target, Bounds bounds) implements SampledInput {
+        Shift(String id, UncertainValue distribution) {
+            this(id, distribution, InputTarget.DEPTH_SHIFT, Bounds.UNBOUNDED);
+        }
+
         public String name() {
             return "Shift " + id;
         }
@@ -65,9 +70,19 @@ class ExtensionContributionsTest {
         Map<String, SampledInput> inputs = new LinkedHashMap<>();
         List<String> problems = SampledInputContributions.readInto(inputs, ElementStub.all(
                 element("input").by("b.ok").with("id", "s").creates("class", new Shift("s", UncertainValue.fixed(0))),
-                element("input").by("b.none").with("id", "n").creates("class", new Shift("n", null))));
+                element("input").by("b.none").with("id", "n").creates("class", new Shift("n", null)),
+                element("input").by("b.aim").with("id", "a").creates("class",
+                        new Shift("a", UncertainValue.fixed(0), null, Bounds.UNBOUNDED)),
+                element("input").by("b.out").with("id", "o").creates("class",
+                        new Shift("o", UncertainValue.uniform(-1, 1), InputTarget.THROW_SCALE, Bounds.NON_NEGATIVE))));
         assertEquals(List.of("s"), List.copyOf(inputs.keySet()));
-        assertEquals(List.of("sampled input 'n' contributed by b.none: distribution() returned nothing"), problems);
+        assertEquals(3, problems.size(), problems.toString());
+        assertEquals("sampled input 'n' contributed by b.none: distribution() returned nothing", problems.get(0));
+        assertEquals("sampled input 'a' contributed by b.aim: target() returned nothing", problems.get(1));
+        assertTrue(problems.get(2).startsWith("sampled input 'o' contributed by b.out: sampled input 'o'"),
+                problems.get(2));
         assertTrue(ResultOutputContributions.platformOutputs().isEmpty(), "no registry outside OSGi");
+        assertEquals(List.of("ssf-maximum-sealing"), List.copyOf(SampledInputContributions.platformInputs().keySet()),
+                "outside OSGi only the built-in inputs");
     }
 }

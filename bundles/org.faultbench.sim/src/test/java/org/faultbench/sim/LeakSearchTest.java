@@ -2,6 +2,7 @@ package org.faultbench.sim;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -111,6 +112,31 @@ class LeakSearchTest {
         assertSameAsReference(richDome(new ShaleSmearFactorCriterion()));
         assertSameAsReference(richDome(new ShaleGougeRatioCriterion(new TabulatedSgrPressure(List.of(
                 new SgrPressurePoint(0, 0), new SgrPressurePoint(15, 0.5e5), new SgrPressurePoint(60, 20e5))))));
+    }
+
+    @Test
+    void aSampledCriterionSettingReachesEveryRealisation() {
+        TrapStudy fixedLimit = richDome(new ShaleSmearFactorCriterion(4));
+        TrapStudy sampledLimit = InputSamplerTest.withInputs(fixedLimit,
+                ContributedInput.withDefault(new MaximumSealingSsfInput()));
+        assertSameAsReference(sampledLimit);
+        assertNotEquals(leakDepths(fixedLimit), leakDepths(sampledLimit),
+                "drawing the SSF limit from 4 to 7 must move some leak points");
+    }
+
+    /** Leak depths of the first realisations, flattened. */
+    private static List<Double> leakDepths(TrapStudy study) {
+        StudyGeometry geometry = new StudyGeometry(study, SimulationSettings.DEFAULT_CELL_HEIGHT);
+        InputSampler sampler = new InputSampler(study);
+        RealisationEvaluator evaluator = new RealisationEvaluator(geometry);
+        List<Double> depths = new ArrayList<>();
+        for (int i = 0; i < REALISATIONS; i++) {
+            RealisationOutcome outcome = evaluator.evaluate(sampler.sample(RealisationRandom.of(5, i)), null);
+            for (int s = 0; s < evaluator.reservoirUnits().length; s++) {
+                depths.add(outcome.get(s, UnitQuantity.LEAK_DEPTH));
+            }
+        }
+        return depths;
     }
 
     private static TrapStudy richDome(SealCriterion criterion) {
@@ -242,7 +268,7 @@ class LeakSearchTest {
             Arrays.fill(connection, Double.POSITIVE_INFINITY);
             cells = new int[geometry.faults.size()][];
             ResolvedColumn column = in.column();
-            SealCriterion criterion = geometry.study.seal().criterion();
+            SealCriterion criterion = geometry.study.seal().criterion().forRealisation(in.criterionValues());
             boolean juxtapositionOnly = geometry.study.seal().juxtapositionOnly();
             double burial = geometry.study.seal().burialDepth();
             double buoyancy = in.densityContrast() * PhysicalConstants.G;

@@ -10,6 +10,7 @@ import java.util.Optional;
 import org.eclipse.core.runtime.NullProgressMonitor;
 import org.faultbench.core.uncertain.UncertainValue;
 import org.faultbench.seal.ShaleGougeRatioCriterion;
+import org.faultbench.seal.ShaleSmearFactorCriterion;
 import org.faultbench.trap.Mechanism;
 import org.junit.jupiter.api.Test;
 
@@ -151,6 +152,24 @@ class MonteCarloSimulatorTest {
         for (int i = 1; i < bars.size(); i++) {
             assertTrue(bars.get(i - 1).swing() >= bars.get(i).swing(), "ranked by swing");
         }
+    }
+
+    @Test
+    void aContributedInputIsRankedInTheTornadoAndLeavesOtherStudiesAlone() {
+        // Throw 45 m: footwall Sand B meets hanging-wall Sand A with the 10 m shale slipped past, SSF = 45 / 10 = 4.5
+        // (Lindsay et al. 1993; hand calculation), sealing only when the drawn limit is above 4.5. The tornado's
+        // low case (limit 4.3) leaks there, the high case (6.7) does not, so Sand B's contact moves.
+        TrapStudy plain = SingleFaultDome.study(45, new ShaleSmearFactorCriterion(), UncertainValue.fixed(1),
+                Optional.empty());
+        TrapStudy sampled = InputSamplerTest.withInputs(plain,
+                ContributedInput.withDefault(new MaximumSealingSsfInput()));
+        List<String> inputs = run(sampled, 4, 1).tornado().get("Sand B").stream().map(TornadoBar::input).toList();
+        assertTrue(inputs.contains("maximum sealing SSF"), inputs.toString());
+        SimulationResult before = run(plain, 40, 2);
+        SimulationResult withEmptyList = run(InputSamplerTest.withInputs(plain), 40, 2);
+        assertEquals(before.units().get(0).statistics(UnitQuantity.CONTACT).level(ExceedanceLevel.P50),
+                withEmptyList.units().get(0).statistics(UnitQuantity.CONTACT).level(ExceedanceLevel.P50), 0,
+                "a study that names no contributed input draws as before");
     }
 
     @Test

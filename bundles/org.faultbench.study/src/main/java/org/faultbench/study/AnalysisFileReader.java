@@ -7,10 +7,13 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 import com.google.gson.JsonElement;
 
@@ -41,8 +44,11 @@ import org.faultbench.seal.ShaleSmearFactorCriterion;
 import org.faultbench.seal.TabulatedSgrPressure;
 import org.faultbench.sim.AtticSetup;
 import org.faultbench.sim.BoundingFault;
+import org.faultbench.sim.ContributedInput;
 import org.faultbench.sim.DepthUncertainty;
 import org.faultbench.sim.FluidContrast;
+import org.faultbench.sim.SampledInput;
+import org.faultbench.sim.SampledInputContributions;
 import org.faultbench.sim.SealSetup;
 import org.faultbench.sim.SimulationSettings;
 import org.faultbench.sim.TrapStudy;
@@ -164,8 +170,10 @@ public final class AnalysisFileReader {
             attic = Optional.of(UncertainValueFormat.wrap(a, () -> new AtticSetup(fault, drainage)));
         }
         Optional<AtticSetup> atticSetup = attic;
+        List<ContributedInput> contributed = doc.has("sampledInputs") ? readSampledInputs(doc.field("sampledInputs"))
+                : List.of();
         return UncertainValueFormat.wrap(doc, () -> new TrapStudy(title, strat, top, compartment, faults, fluids, seal,
-                depth, spill, topSeal, atticSetup));
+                depth, spill, topSeal, atticSetup, contributed));
     }
 
     private static Optional<UncertainValue> optionalValue(JsonNode node, String field) throws StudyFormatException {
@@ -426,6 +434,32 @@ public final class AnalysisFileReader {
             points.add(UncertainValueFormat.wrap(row, () -> new SgrPressurePoint(pair[0], pair[1] * 1e5)));
         }
         return UncertainValueFormat.wrap(model, () -> new TabulatedSgrPressure(points));
+    }
+
+    /**
+     * Plug-in sampled inputs the study includes, in draw order: {@code [{"id": "...", "distribution": ...}]}, the
+     * distribution optional (the contribution's own by default).
+     */
+    private static List<ContributedInput> readSampledInputs(JsonNode list) throws StudyFormatException {
+        Map<String, SampledInput> installed = SampledInputContributions.platformInputs();
+        List<ContributedInput> inputs = new ArrayList<>();
+        Set<String> seen = new HashSet<>();
+        for (JsonNode entry : list.array()) {
+            JsonNode idNode = entry.field("id");
+            String id = idNode.string();
+            SampledInput input = installed.get(id);
+            if (input == null) {
+                throw idNode.error("no sampled input has the id \"" + id + "\"; installed: " + installed.keySet());
+            }
+            if (!seen.add(id)) {
+                throw idNode.error("sampled input \"" + id + "\" is listed twice");
+            }
+            UncertainValue distribution = entry.has("distribution")
+                    ? UncertainValueFormat.read(entry.field("distribution")) : null;
+            inputs.add(UncertainValueFormat.wrap(entry.has("distribution") ? entry.field("distribution") : entry,
+                    () -> new ContributedInput(input, distribution)));
+        }
+        return inputs;
     }
 
     private static DepthUncertainty readDepth(JsonNode node) throws StudyFormatException {

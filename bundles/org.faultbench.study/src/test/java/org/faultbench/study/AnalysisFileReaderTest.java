@@ -8,11 +8,15 @@ import java.io.IOException;
 import java.nio.file.Path;
 
 import org.eclipse.core.runtime.NullProgressMonitor;
+import org.faultbench.core.uncertain.UncertainValue;
 import org.faultbench.seal.ShaleGougeRatioCriterion;
+import org.faultbench.sim.ContributedInput;
 import org.faultbench.sim.ExceedanceLevel;
+import org.faultbench.sim.InputTarget;
 import org.faultbench.sim.MonteCarloSimulator;
 import org.faultbench.sim.SimulationResult;
 import org.faultbench.sim.SimulationSettings;
+import org.faultbench.sim.TrapStudy;
 import org.faultbench.sim.UnitQuantity;
 import org.faultbench.trap.Mechanism;
 import org.junit.jupiter.api.Test;
@@ -59,6 +63,37 @@ class AnalysisFileReaderTest {
         var sandA = result.units().get(0);
         assertEquals(Mechanism.LEAK, sandA.baseMechanism());
         assertEquals(1046.5, sandA.statistics(UnitQuantity.CONTACT).level(ExceedanceLevel.P50), 0.01);
+    }
+
+    @Test
+    void sampledInputsAreIncludedByIdWithTheirOwnOrTheFilesDistribution() throws Exception {
+        String withInputs = valid("ssf").replace("\"attic\":", """
+                "sampledInputs": [{"id": "ssf-maximum-sealing", "distribution": {"uniform": {"min": 5, "max": 6}}}],
+                "attic":""");
+        TrapStudy study = read(withInputs).study();
+        assertEquals(1, study.contributedInputs().size());
+        ContributedInput ssf = study.contributedInputs().get(0);
+        assertEquals(InputTarget.CRITERION, ssf.target());
+        assertEquals(UncertainValue.uniform(5, 6), ssf.distribution());
+        TrapStudy byDefault = read(withInputs.replace(", \"distribution\": {\"uniform\": {\"min\": 5, \"max\": 6}}",
+                "")).study();
+        assertEquals(UncertainValue.uniform(4, 7), byDefault.contributedInputs().get(0).distribution(),
+                "the contribution's own range: Gibson (1994) 4 to Lindsay et al. (1993) 7");
+        assertTrue(read(valid("ssf")).study().contributedInputs().isEmpty(), "none unless the file names them");
+    }
+
+    @Test
+    void unknownRepeatedOrOutOfBoundsSampledInputsAreNamed() throws Exception {
+        String unknown = valid("sgr").replace("\"attic\":", "\"sampledInputs\": [{\"id\": \"nope\"}], \"attic\":");
+        StudyFormatException e = rejected(unknown);
+        assertEquals("sampledInputs[0].id", e.field());
+        assertTrue(e.getMessage().contains("ssf-maximum-sealing"), "lists what is installed: " + e.getMessage());
+        String twice = valid("ssf").replace("\"attic\":",
+                "\"sampledInputs\": [{\"id\": \"ssf-maximum-sealing\"}, {\"id\": \"ssf-maximum-sealing\"}], \"attic\":");
+        assertEquals("sampledInputs[1].id", rejected(twice).field());
+        String below = valid("ssf").replace("\"attic\":", "\"sampledInputs\": [{\"id\": \"ssf-maximum-sealing\","
+                + " \"distribution\": {\"uniform\": {\"min\": 0.5, \"max\": 3}}}], \"attic\":");
+        assertEquals("sampledInputs[0].distribution", rejected(below).field());
     }
 
     @Test
