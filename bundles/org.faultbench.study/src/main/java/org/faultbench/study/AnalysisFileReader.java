@@ -248,15 +248,13 @@ public final class AnalysisFileReader {
         if (!Files.isRegularFile(gridFile)) {
             throw fileNode.error("grid file not found: " + gridFile);
         }
+        if (!"esri-ascii".equals(format) && !"zmap".equals(format)) {
+            throw node.field("format").error("expected \"esri-ascii\" or \"zmap\", found \"" + format + "\"");
+        }
         try {
-            switch (format) {
-            case "esri-ascii":
-                return new EsriAsciiGridReader(FileUnits.of(unit)).read(gridFile);
-            case "zmap":
-                return new ZmapGridReader(FileUnits.of(unit)).read(gridFile);
-            default:
-                throw node.field("format").error("expected \"esri-ascii\" or \"zmap\", found \"" + format + "\"");
-            }
+            return GridFileCache.SHARED.read(gridFile, format, unit, () -> "zmap".equals(format)
+                    ? new ZmapGridReader(FileUnits.of(unit)).read(gridFile)
+                    : new EsriAsciiGridReader(FileUnits.of(unit)).read(gridFile));
         } catch (IOException e) {
             throw fileNode.error("grid cannot be read: " + e.getMessage(), e);
         }

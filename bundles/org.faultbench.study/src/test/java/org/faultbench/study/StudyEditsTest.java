@@ -2,6 +2,7 @@ package org.faultbench.study;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -39,6 +40,15 @@ class StudyEditsTest {
         AnalysisFile reread = new AnalysisFileReader().read(saved);
         assertEquals(edited.study().stratigraphy(), reread.study().stratigraphy());
         assertEquals(edited.sha256(), reread.sha256(), "the hash is that of the bytes that are saved");
+    }
+
+    @Test
+    void anEditKeepsTheGridsItHasAlreadyRead() throws Exception {
+        AnalysisFile original = dome();
+        AnalysisFile edited = StudyEdits.withUnitProperty(original, 0, UnitProperty.THICKNESS,
+                UncertainValue.fixed(55));
+        assertSame(original.study().referenceTop(), edited.study().referenceTop(),
+                "the reference-top grid file is not parsed again for a stratigraphy edit");
     }
 
     @Test
