@@ -79,6 +79,17 @@ public final class MapSheet {
         return selected;
     }
 
+    /**
+     * A copy holding the same (immutable) features and none of the listeners, for work off the thread that edits
+     * this sheet, e.g. a topology check in a background job.
+     */
+    public MapSheet snapshot() {
+        MapSheet copy = new MapSheet();
+        copy.features.putAll(features);
+        copy.highestId = highestId;
+        return copy;
+    }
+
     public void addListener(MapSheetListener listener) {
         listeners.add(SheetGeometry.required(listener, "map sheet listener"));
     }

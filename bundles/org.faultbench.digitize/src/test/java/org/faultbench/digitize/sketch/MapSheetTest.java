@@ -34,6 +34,19 @@ class MapSheetTest {
     }
 
     @Test
+    void aSnapshotKeepsTheFeaturesOfItsMomentAndNoListeners() {
+        ContourFeature contour = Sheets.contour(sheet, 1500, 0, 0, 100, 0);
+        MapSheet snapshot = sheet.snapshot();
+        int announced = history.size();
+        snapshot.remove(contour.id());
+        assertEquals(announced, history.size(), "the snapshot tells the sheet's listeners nothing");
+        assertEquals(List.of(contour), sheet.features(), "editing the snapshot leaves the sheet alone");
+        Sheets.contour(sheet, 1510, 0, 10, 100, 10);
+        assertTrue(snapshot.features().isEmpty(), "later sheet edits do not reach the snapshot");
+        assertEquals(new FeatureId(2), snapshot.nextId(), "ids continue after the highest the sheet had given");
+    }
+
+    @Test
     void idsStayUniqueAndReplacingKeepsTheDrawingOrder() {
         ContourFeature first = Sheets.contour(sheet, 1500, 0, 0, 100, 0);
         FaultTraceFeature trace = new FaultTraceFeature(new FeatureId(7), "F1", Sheets.line(0, 0, 0, 100),

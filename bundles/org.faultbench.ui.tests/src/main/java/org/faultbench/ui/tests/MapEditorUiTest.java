@@ -6,7 +6,15 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Set;
+import java.util.stream.Collectors;
 
+import org.eclipse.core.resources.IMarker;
+import org.eclipse.core.resources.IResource;
+import org.eclipse.core.resources.ResourcesPlugin;
+import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.draw2d.geometry.PrecisionPoint;
 import org.eclipse.draw2d.geometry.Point;
@@ -24,6 +32,7 @@ import org.faultbench.digitize.sketch.ContourFeature;
 import org.faultbench.digitize.sketch.MapSheet;
 import org.faultbench.digitize.ui.editing.DigitizeKind;
 import org.faultbench.digitize.ui.editing.MapDocument;
+import org.faultbench.digitize.ui.editing.SheetEditCommand;
 import org.faultbench.digitize.ui.georef.ControlPointsView;
 import org.faultbench.digitize.ui.map.MapSheetEditor;
 import org.faultbench.digitize.ui.map.MapSheetEditorInput;
@@ -32,6 +41,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.GeometryFactory;
 
 /**
  * The map editor on the demo scan in the real workbench: a contour digitized with three clicks (real SWT mouse
@@ -91,6 +101,48 @@ class MapEditorUiTest {
             mouse(canvas, SWT.MouseUp, at);
         }
         WorkbenchSmokeTest.spin(30);
+    }
+
+    @Test
+    void crossingContoursAreListedInProblemsUntilUndoneAndChoosingOneSelectsThem() throws Exception {
+        MapSheet sheet = editor.document().sheet();
+        GeometryFactory gf = new GeometryFactory();
+        ContourFeature a = new ContourFeature(sheet.nextId(), "Top A", 1500, gf.createLineString(new Coordinate[] {
+            new Coordinate(400600, 6205200), new Coordinate(401400, 6205200) }));
+        ContourFeature b = new ContourFeature(sheet.nextId(), "Top A", 1510, gf.createLineString(new Coordinate[] {
+            new Coordinate(401000, 6204800), new Coordinate(401000, 6205600) }));
+        editor.commandStack().execute(SheetEditCommand.adding(sheet, a));
+        editor.commandStack().execute(SheetEditCommand.adding(sheet, b));
+        IMarker[] markers = topologyMarkers();
+        // contours of different depth cannot cross (common practice; the checker calls it an error)
+        IMarker crossing = Arrays.stream(markers).filter(m -> m.getAttribute(IMarker.SEVERITY, -1)
+                == IMarker.SEVERITY_ERROR).findFirst().orElseThrow(() -> new AssertionError("no error marker"));
+        assertTrue(crossing.getAttribute(IMarker.MESSAGE, "").contains("1500")
+                && crossing.getAttribute(IMarker.LOCATION, "").contains("x 401000, y 6205200"),
+                crossing.getAttribute(IMarker.MESSAGE, "") + " at " + crossing.getAttribute(IMarker.LOCATION, ""));
+
+        assertTrue(editor.showProblem(crossing));
+        WorkbenchSmokeTest.spin(100);
+        List<?> selected = editor.viewer().getSelectedEditParts();
+        assertEquals(Set.of(a.id(), b.id()), selected.stream().map(p -> ((EditPart) p).getModel())
+                .collect(Collectors.toSet()), "both contours selected");
+
+        editor.commandStack().undo();
+        assertEquals(0, topologyMarkers().length, "undoing the second contour clears the problem");
+    }
+
+    private IMarker[] topologyMarkers() throws Exception {
+        WorkbenchSmokeTest.spin(50);
+        long end = System.currentTimeMillis() + 10_000;
+        while (System.currentTimeMillis() < end) {
+            Job check = editor.topologyCheck();
+            if (check.getState() == Job.NONE) {
+                break;
+            }
+            WorkbenchSmokeTest.spin(50);
+        }
+        return ResourcesPlugin.getWorkspace().getRoot().findMarkers(MapSheetEditor.topologyMarkerType(), false,
+                IResource.DEPTH_ZERO);
     }
 
     @Test

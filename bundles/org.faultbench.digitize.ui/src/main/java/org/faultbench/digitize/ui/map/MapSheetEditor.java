@@ -4,10 +4,13 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 
+import org.eclipse.core.resources.IMarker;
+import org.eclipse.core.runtime.Adapters;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.draw2d.FigureCanvas;
 import org.eclipse.draw2d.PositionConstants;
 import org.eclipse.gef.DefaultEditDomain;
+import org.eclipse.gef.EditPart;
 import org.eclipse.gef.GraphicalViewer;
 import org.eclipse.gef.MouseWheelHandler;
 import org.eclipse.gef.MouseWheelZoomHandler;
@@ -23,16 +26,20 @@ import org.eclipse.gef.ui.parts.GraphicalEditorWithFlyoutPalette;
 import org.eclipse.gef.ui.parts.GraphicalViewerKeyHandler;
 import org.eclipse.jface.action.IAction;
 import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.jface.viewers.IStructuredSelection;
+import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.IEditorInput;
 import org.eclipse.ui.IEditorSite;
 import org.eclipse.ui.IPathEditorInput;
+import org.eclipse.ui.ISelectionListener;
 import org.eclipse.ui.IURIEditorInput;
 import org.eclipse.ui.IWorkbenchCommandConstants;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.actions.ActionFactory;
 import org.faultbench.digitize.raster.ImagePyramid;
+import org.faultbench.digitize.sketch.FeatureId;
 import org.faultbench.digitize.ui.editing.MapDocument;
 import org.faultbench.digitize.ui.store.MapDocuments;
 import org.faultbench.digitize.ui.store.MapSheetDocumentStore;
@@ -56,6 +63,15 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
     private MapDocument document;
     private Path saveTo;
     private ImagePyramid pyramid;
+    private TopologyWatch topology;
+    private final ISelectionListener problemSelection = (part, selection) -> {
+        if (selection instanceof IStructuredSelection chosen && chosen.getFirstElement() != null) {
+            IMarker marker = Adapters.adapt(chosen.getFirstElement(), IMarker.class);
+            if (marker != null) {
+                showProblem(marker);
+            }
+        }
+    };
 
     public MapSheetEditor() {
         setEditDomain(new DefaultEditDomain(this));
@@ -76,6 +92,7 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
         }
         super.init(site, input);
         setPartName(input.getName());
+        site.getPage().addSelectionListener(problemSelection);
     }
 
     private static Path fileOf(IEditorInput input) throws PartInitException {
@@ -181,6 +198,8 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
     protected void initializeGraphicalViewer() {
         super.initializeGraphicalViewer();
         getGraphicalViewer().setContents(document);
+        topology = new TopologyWatch(document.sheet(), saveTo.getFileName().toString());
+        topology.start();
         Display.getCurrent().asyncExec(() -> {
             if (getGraphicalViewer().getControl() != null && !getGraphicalViewer().getControl().isDisposed()) {
                 zoomManager().setZoomAsText(ZoomManager.FIT_ALL);
@@ -256,8 +275,49 @@ public final class MapSheetEditor extends GraphicalEditorWithFlyoutPalette {
         }
     }
 
+    /**
+     * Selects the features a topology marker of this sheet names (as when it is chosen in the Problems view);
+     * returns whether the marker was one of this sheet's.
+     */
+    public boolean showProblem(IMarker marker) {
+        if (topology == null || !topology.sheetName().equals(marker.getAttribute(TopologyMarkers.SHEET, null))) {
+            return false;
+        }
+        selectFeatures(TopologyMarkers.features(marker));
+        return true;
+    }
+
+    /** Selects the edit parts of the features still on the sheet and scrolls the first into view. */
+    public void selectFeatures(List<FeatureId> features) {
+        List<EditPart> parts = new java.util.ArrayList<>();
+        for (FeatureId id : features) {
+            Object part = getGraphicalViewer().getEditPartRegistry().get(id);
+            if (part instanceof EditPart editPart) {
+                parts.add(editPart);
+            }
+        }
+        if (!parts.isEmpty()) {
+            getGraphicalViewer().setSelection(new StructuredSelection(parts));
+            getGraphicalViewer().reveal(parts.get(0));
+        }
+    }
+
+    /** The background check of the sheet's topology, so that callers can wait for the markers to be current. */
+    public org.eclipse.core.runtime.jobs.Job topologyCheck() {
+        return topology.job();
+    }
+
+    /** Marker type of the map topology problems in the Problems view. */
+    public static String topologyMarkerType() {
+        return TopologyMarkers.TYPE;
+    }
+
     @Override
     public void dispose() {
+        getSite().getPage().removeSelectionListener(problemSelection);
+        if (topology != null) {
+            topology.stop();
+        }
         if (document != null) {
             document.scan().ifPresent(ScanPyramids::release);
         }
