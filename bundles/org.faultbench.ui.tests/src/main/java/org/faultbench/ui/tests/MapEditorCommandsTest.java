@@ -13,6 +13,7 @@ import org.eclipse.gef.commands.CommandStack;
 import org.faultbench.digitize.georef.ControlPoint;
 import org.faultbench.digitize.georef.TransformKind;
 import org.faultbench.digitize.io.FormatException;
+import org.faultbench.digitize.io.WellTop;
 import org.faultbench.digitize.sketch.ContourFeature;
 import org.faultbench.digitize.sketch.CutOffFeature;
 import org.faultbench.digitize.sketch.FaultPolygonFeature;
@@ -23,6 +24,7 @@ import org.faultbench.digitize.sketch.MarkerKind;
 import org.faultbench.digitize.sketch.SheetFeature;
 import org.faultbench.digitize.sketch.TraceSide;
 import org.faultbench.digitize.sketch.Wall;
+import org.faultbench.digitize.sketch.WellFeature;
 import org.faultbench.digitize.ui.editing.ControlPointCommand;
 import org.faultbench.digitize.ui.editing.DigitizeKind;
 import org.faultbench.digitize.ui.editing.DigitizingDefaults;
@@ -34,6 +36,7 @@ import org.faultbench.digitize.ui.editing.SheetEditCommand;
 import org.faultbench.digitize.ui.editing.SnapTolerance;
 import org.faultbench.digitize.ui.editing.TraceTicks;
 import org.faultbench.digitize.ui.editing.TransformKindCommand;
+import org.faultbench.digitize.ui.editing.WellTopsText;
 import org.faultbench.digitize.ui.store.ControlPointCsv;
 import org.faultbench.digitize.ui.store.VersionedMapSheetStore;
 import org.faultbench.digitize.ui.store.MapSheetDocument;
@@ -115,6 +118,37 @@ class MapEditorCommandsTest {
         defaults.contourDrawn(1500.2);
         // decimal stepping as typed (ContourValueStepper): 1500.2 + 0.1 = 1500.3 exactly, no binary round-off
         assertEquals(1500.3, defaults.nextContourValue());
+    }
+
+    @Test
+    void wellNamesCountOnAndTopsAreTypedAsSurfaceEqualsDepth() {
+        assertEquals("W-2", DigitizingDefaults.nextName("W-1"));
+        assertEquals("W-10", DigitizingDefaults.nextName("W-09"), "leading zeros kept while they fit");
+        assertEquals("A-100", DigitizingDefaults.nextName("A-099"));
+        assertEquals("Discovery-2", DigitizingDefaults.nextName("Discovery"));
+        DigitizingDefaults defaults = new DigitizingDefaults();
+        SheetFeature posted = FeatureEdits.create(DigitizeKind.WELL, new MapSheet().nextId(),
+                List.of(new Coordinate(100, 200)), defaults);
+        WellFeature well = (WellFeature) posted;
+        assertEquals("W-1", well.name());
+        assertTrue(well.tops().isEmpty());
+
+        List<WellTop> tops = WellTopsText.parse(" Top A = 1523.5 ; Top B=1610m;", well);
+        assertEquals(List.of(new WellTop("W-1", "Top A", 100, 200, 1523.5, Double.NaN),
+                new WellTop("W-1", "Top B", 100, 200, 1610, Double.NaN)), tops);
+        assertEquals("Top A = 1523.5; Top B = 1610", WellTopsText.format(tops));
+        WellFeature deviated = new WellFeature(well.id(), "W-1", 100, 200,
+                List.of(new WellTop("W-1", "Top A", 130, 240, 1500, 1620)));
+        assertEquals(new WellTop("W-1", "Top A", 130, 240, 1525, 1620),
+                WellTopsText.parse("Top A = 1525", deviated).get(0), "a deviated pick keeps its position and MD");
+        assertTrue(WellTopsText.parse("  ", well).isEmpty());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> WellTopsText.parse("Top A 1523", well));
+        assertTrue(e.getMessage().contains("'Top A 1523' is not 'surface = depth'"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> WellTopsText.parse("Top A = deep", well));
+        assertTrue(e.getMessage().contains("depth of 'Top A' must be a number"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> WellTopsText.parse("Top A = 1; Top A = 2", well));
+        assertTrue(e.getMessage().contains("given twice"), e.getMessage());
     }
 
     @Test

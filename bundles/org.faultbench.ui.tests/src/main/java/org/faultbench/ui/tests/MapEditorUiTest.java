@@ -30,6 +30,7 @@ import org.eclipse.ui.handlers.IHandlerService;
 import org.eclipse.ui.views.properties.IPropertySource;
 import org.faultbench.digitize.sketch.ContourFeature;
 import org.faultbench.digitize.sketch.MapSheet;
+import org.faultbench.digitize.sketch.WellFeature;
 import org.faultbench.digitize.ui.editing.DigitizeKind;
 import org.faultbench.digitize.ui.editing.MapDocument;
 import org.faultbench.digitize.ui.editing.SheetEditCommand;
@@ -193,6 +194,30 @@ class MapEditorUiTest {
         IPropertySource properties = (IPropertySource) part.getAdapter(IPropertySource.class);
         assertEquals("Contour", properties.getPropertyValue("kind"));
         assertEquals("1500", properties.getPropertyValue("depth"));
+    }
+
+    @Test
+    void aWellIsPostedWithOneClickAndGetsItsTopsInProperties() {
+        MapSheet sheet = editor.document().sheet();
+        editor.activateTool(DigitizeKind.WELL);
+        FigureCanvas canvas = (FigureCanvas) editor.viewer().getControl();
+        click(canvas, screenOf(401000, 6205400), false);
+        WellFeature well = assertInstanceOf(WellFeature.class, sheet.features().get(0));
+        assertEquals("W-1", well.name());
+        // one click at zoom 1 and 5 m per pixel: within one pixel diagonal (7.1 m)
+        assertEquals(401000, well.x(), 7.1);
+        assertEquals(6205400, well.y(), 7.1);
+        assertEquals("W-2", editor.document().defaults().wellName(), "the next well gets the next number");
+
+        EditPart part = (EditPart) editor.viewer().getEditPartRegistry().get(well.id());
+        IPropertySource properties = (IPropertySource) part.getAdapter(IPropertySource.class);
+        properties.setPropertyValue("tops", "Top A = 1523.5; Top B = 1610 m");
+        WellFeature withTops = (WellFeature) sheet.require(well.id());
+        assertEquals(List.of("Top A", "Top B"), withTops.tops().stream().map(t -> t.surface()).toList());
+        assertEquals(1610, withTops.topsOn("Top B").get(0).tvdss(), 0);
+        assertEquals("Top A = 1523.5; Top B = 1610", properties.getPropertyValue("tops"));
+        properties.setPropertyValue("wellName", "Appraisal-3");
+        assertEquals("Appraisal-3", ((WellFeature) sheet.require(well.id())).topsOn("Top A").get(0).well());
     }
 
     @Test

@@ -8,6 +8,7 @@ public enum DigitizeKind {
     FOOTWALL_CUT_OFF("Footwall cut-off", 2),
     HANGING_WALL_CUT_OFF("Hanging-wall cut-off", 2),
     MARKER("Marker", 1),
+    WELL("Well", 1),
     CONTROL_POINT("Control point", 1);
 
     private final String label;

@@ -10,7 +10,8 @@ import org.faultbench.digitize.sketch.TraceSide;
 /**
  * The attributes a newly digitized feature gets, so that a geologist tracing a contour map clicks lines rather than
  * typing: the horizon, the next contour value (stepped by the contour interval after each contour, as the
- * {@link ContourValueStepper} does), the fault name and its hanging-wall side, and the marker kind. Mutable editor
+ * {@link ContourValueStepper} does), the fault name and its hanging-wall side, the marker kind and the next well
+ * name (its number stepped after each well). Mutable editor
  * state, not part of the saved sheet.
  */
 public final class DigitizingDefaults {
@@ -21,6 +22,7 @@ public final class DigitizingDefaults {
     private String fault = "F1";
     private TraceSide hangingWallSide = TraceSide.RIGHT;
     private MarkerKind markerKind = MarkerKind.CREST;
+    private String wellName = "W-1";
 
     public String horizon() {
         return horizon;
@@ -92,5 +94,36 @@ public final class DigitizingDefaults {
             throw new IllegalArgumentException(field + " is empty");
         }
         return name.strip();
+    }
+
+    public String wellName() {
+        return wellName;
+    }
+
+    public void setWellName(String name) {
+        wellName = requireName(name, "well name");
+    }
+
+    /** Called after a well named {@code name} was posted: the next one gets the following number. */
+    public void wellDrawn(String name) {
+        wellName = nextName(name);
+    }
+
+    /**
+     * The name after {@code name}: its trailing number plus one, keeping leading zeros ("W-09" gives "W-10"), or
+     * "-2" appended when it ends in no number.
+     */
+    public static String nextName(String name) {
+        int digits = name.length();
+        while (digits > 0 && Character.isDigit(name.charAt(digits - 1))) {
+            digits--;
+        }
+        if (digits == name.length()) {
+            return name + "-2";
+        }
+        String number = name.substring(digits);
+        String next = new java.math.BigInteger(number).add(java.math.BigInteger.ONE).toString();
+        String padded = "0".repeat(Math.max(0, number.length() - next.length())) + next;
+        return name.substring(0, digits) + padded;
     }
 }

@@ -49,6 +49,7 @@ public final class FeatureEdits {
                     Wall.HANGING_WALL, line(points));
             case MARKER -> new MarkerFeature(id, defaults.markerKind(), points.get(0).x, points.get(0).y,
                     defaults.horizon(), "");
+            case WELL -> new WellFeature(id, defaults.wellName(), points.get(0).x, points.get(0).y, List.of());
             case CONTROL_POINT -> throw new IllegalArgumentException("a control point is not a sheet feature");
         };
     }

@@ -13,7 +13,7 @@ import org.faultbench.digitize.ui.editing.DigitizingDefaults;
 
 /**
  * The digitizing defaults in the Properties view, shown when the empty map is selected: what the next contour,
- * fault or marker will get, and the contour interval the value steps by after each contour.
+ * fault, marker or well will get, and the contour interval the value steps by after each contour.
  */
 final class DefaultsPropertySource implements IPropertySource {
     private static final String HORIZON = "horizon";
@@ -23,6 +23,7 @@ final class DefaultsPropertySource implements IPropertySource {
     private static final String FAULT = "fault";
     private static final String SIDE = "side";
     private static final String MARKER = "marker";
+    private static final String WELL = "well";
 
     private final DigitizingDefaults defaults;
 
@@ -46,7 +47,8 @@ final class DefaultsPropertySource implements IPropertySource {
             new ComboBoxPropertyDescriptor(SIDE, "New traces: hanging wall (downthrown) side",
                     Choices.labels(TraceSide.values(), s -> s.name().toLowerCase(Locale.ROOT))),
             new ComboBoxPropertyDescriptor(MARKER, "New markers", Choices.labels(MarkerKind.values(),
-                    MarkerKind::label)) };
+                    MarkerKind::label)),
+            new TextPropertyDescriptor(WELL, "Next well name") };
     }
 
     @Override
@@ -59,6 +61,7 @@ final class DefaultsPropertySource implements IPropertySource {
             case FAULT -> defaults.fault();
             case SIDE -> defaults.hangingWallSide().ordinal();
             case MARKER -> defaults.markerKind().ordinal();
+            case WELL -> defaults.wellName();
             default -> null;
         };
     }
@@ -83,6 +86,7 @@ final class DefaultsPropertySource implements IPropertySource {
             case FAULT -> defaults.setFault((String) value);
             case SIDE -> defaults.setHangingWallSide(Choices.at(TraceSide.values(), value));
             case MARKER -> defaults.setMarkerKind(Choices.at(MarkerKind.values(), value));
+            case WELL -> defaults.setWellName((String) value);
             default -> {
                 // read-only
             }

@@ -9,6 +9,7 @@ import org.eclipse.ui.views.properties.IPropertyDescriptor;
 import org.eclipse.ui.views.properties.IPropertySource;
 import org.eclipse.ui.views.properties.PropertyDescriptor;
 import org.eclipse.ui.views.properties.TextPropertyDescriptor;
+import org.faultbench.digitize.io.WellTop;
 import org.faultbench.digitize.sketch.ContourFeature;
 import org.faultbench.digitize.sketch.CutOffFeature;
 import org.faultbench.digitize.sketch.FaultPolygonFeature;
@@ -21,6 +22,7 @@ import org.faultbench.digitize.sketch.SheetFeature;
 import org.faultbench.digitize.sketch.TraceSide;
 import org.faultbench.digitize.sketch.Wall;
 import org.faultbench.digitize.sketch.WellFeature;
+import org.faultbench.digitize.ui.editing.WellTopsText;
 
 /**
  * A selected feature in the Properties view: kind, id, horizon, contour value, fault, wall, hanging-wall side,
@@ -38,6 +40,8 @@ final class FeaturePropertySource implements IPropertySource {
     static final String MARKER = "marker";
     static final String VERTICES = "vertices";
     static final String LENGTH = "length";
+    static final String WELL_NAME = "wellName";
+    static final String TOPS = "tops";
 
     private final MapSheet sheet;
     private final FeatureId id;
@@ -78,6 +82,10 @@ final class FeaturePropertySource implements IPropertySource {
             d.add(new ComboBoxPropertyDescriptor(SIDE, "Hanging wall (downthrown) side",
                     Choices.labels(TraceSide.values(), s -> s.name().toLowerCase(Locale.ROOT))));
         }
+        if (f instanceof WellFeature) {
+            d.add(new TextPropertyDescriptor(WELL_NAME, "Well name"));
+            d.add(new TextPropertyDescriptor(TOPS, "Tops (surface = m TVDSS; ...)"));
+        }
         if (f instanceof MarkerFeature) {
             d.add(new ComboBoxPropertyDescriptor(MARKER, "Marker", Choices.labels(MarkerKind.values(),
                     MarkerKind::label)));
@@ -103,6 +111,8 @@ final class FeaturePropertySource implements IPropertySource {
             case WALL -> ((CutOffFeature) f).wall().ordinal();
             case SIDE -> ((FaultTraceFeature) f).hangingWallSide().ordinal();
             case MARKER -> ((MarkerFeature) f).kind().ordinal();
+            case WELL_NAME -> ((WellFeature) f).name();
+            case TOPS -> WellTopsText.format(((WellFeature) f).tops());
             case VERTICES -> String.valueOf(f.geometry().getNumPoints());
             case LENGTH -> String.format(Locale.ROOT, "%.1f", f.geometry().getLength());
             default -> null;
@@ -142,11 +152,25 @@ final class FeaturePropertySource implements IPropertySource {
                 yield new MarkerFeature(m.id(), Choices.at(MarkerKind.values(), value), m.x(), m.y(), m.horizon(),
                         m.note());
             }
+            case WELL_NAME -> renamed((WellFeature) f, (String) value);
+            case TOPS -> {
+                WellFeature w = (WellFeature) f;
+                yield new WellFeature(w.id(), w.name(), w.x(), w.y(), WellTopsText.parse((String) value, w));
+            }
             default -> f;
         };
         if (!edited.equals(f)) {
             sheet.replace(edited);
         }
+    }
+
+    /** The well under a new name, its tops carried over (each top names its well). */
+    private static WellFeature renamed(WellFeature w, String name) {
+        String newName = name == null ? "" : name.strip();
+        return new WellFeature(w.id(), newName, w.x(), w.y(), w.tops().stream()
+                .map(t -> new WellTop(newName.isEmpty() ? t.well() : newName, t.surface(), t.x(), t.y(), t.tvdss(),
+                        t.md()))
+                .toList());
     }
 
     static double parseMetres(Object value) {

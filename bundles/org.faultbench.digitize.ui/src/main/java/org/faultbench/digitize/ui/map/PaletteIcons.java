@@ -8,7 +8,7 @@ import org.faultbench.digitize.ui.editing.DigitizeKind;
 /**
  * The palette's 16 × 16 icons, drawn pixel by pixel in code in the map colours of each tool (no image files, no
  * display needed): a wavy contour, a fault with ticks, a filled polygon, dashed cut-offs, a crest triangle, a
- * control-point cross.
+ * well dot, a control-point cross.
  */
 final class PaletteIcons {
     private static final int SIZE = 16;
@@ -47,6 +47,16 @@ final class PaletteIcons {
                     int half = (y - 3) / 2 + 1;
                     c.line(8 - half, y, 8 + half, y, 220, 150, 0);
                 }
+            }
+            case WELL -> {
+                for (int a = 0; a < 360; a += 5) {
+                    double r = Math.toRadians(a);
+                    for (double radius = 0; radius <= 4; radius += 0.5) {
+                        c.set((int) Math.round(8 + radius * Math.cos(r)), (int) Math.round(8 + radius * Math.sin(r)),
+                                20, 20, 20);
+                    }
+                }
+                c.line(8, 1, 8, 15, 20, 20, 20);
             }
             case CONTROL_POINT -> {
                 c.line(1, 8, 15, 8, 200, 0, 160);

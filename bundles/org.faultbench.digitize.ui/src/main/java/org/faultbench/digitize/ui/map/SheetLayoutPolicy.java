@@ -17,6 +17,7 @@ import org.faultbench.digitize.georef.ControlPoint;
 import org.faultbench.digitize.sketch.ContourFeature;
 import org.faultbench.digitize.sketch.MapSheet;
 import org.faultbench.digitize.sketch.SheetFeature;
+import org.faultbench.digitize.sketch.WellFeature;
 import org.faultbench.digitize.ui.editing.ControlPointCommand;
 import org.faultbench.digitize.ui.editing.DigitizeKind;
 import org.faultbench.digitize.ui.editing.FeatureEdits;
@@ -64,25 +65,33 @@ final class SheetLayoutPolicy extends LayoutEditPolicy {
                 document.defaults());
         SheetEditCommand add = SheetEditCommand.adding(sheet, feature);
         if (feature instanceof ContourFeature contour) {
-            return new Command(add.getLabel()) {
-                @Override
-                public void execute() {
-                    add.execute();
-                    document.defaults().contourDrawn(contour.depth());
-                }
-
-                @Override
-                public void undo() {
-                    add.undo();
-                }
-
-                @Override
-                public void redo() {
-                    add.redo();
-                }
-            };
+            return steppingDefaults(add, () -> document.defaults().contourDrawn(contour.depth()));
+        }
+        if (feature instanceof WellFeature well) {
+            return steppingDefaults(add, () -> document.defaults().wellDrawn(well.name()));
         }
         return add;
+    }
+
+    /** {@code add}, stepping the digitizing defaults (next contour value, next well name) when first executed. */
+    private static Command steppingDefaults(SheetEditCommand add, Runnable step) {
+        return new Command(add.getLabel()) {
+            @Override
+            public void execute() {
+                add.execute();
+                step.run();
+            }
+
+            @Override
+            public void undo() {
+                add.undo();
+            }
+
+            @Override
+            public void redo() {
+                add.redo();
+            }
+        };
     }
 
     @Override
