@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.CoordinateArrays;
 import org.locationtech.jts.geom.LineString;
 import org.locationtech.jts.index.strtree.STRtree;
 import org.locationtech.jts.operation.valid.IsSimpleOp;
@@ -37,8 +38,14 @@ final class ContourCrossings {
         return problems;
     }
 
+    /**
+     * Repeated vertices (a double-click, a traced line through a node) are not a crossing, but JTS 1.20's
+     * IsSimpleOp reports a vertex repeated three times at a bend as non-simple, so they are dropped first.
+     */
     private static void selfCrossing(ContourFeature contour, List<TopologyProblem> problems) {
-        IsSimpleOp simple = new IsSimpleOp(contour.line());
+        LineString line = contour.line();
+        IsSimpleOp simple = new IsSimpleOp(line.getFactory().createLineString(
+                CoordinateArrays.removeRepeatedPoints(line.getCoordinates())));
         if (!simple.isSimple()) {
             Coordinate at = simple.getNonSimpleLocation();
             problems.add(new TopologyProblem(ProblemKind.CONTOUR_CROSSES_ITSELF, List.of(contour.id()), at.x, at.y,
