@@ -9,7 +9,7 @@ for stage in map-sheet:mapSheet fault-review:faultReview stratigraphy:stratigrap
   name=${stage%%:*}
   id=org.faultbench.app.perspective.${stage##*:}
   extra="-Dfaultbench.perspective=$id"
-  [ "$name" = map-sheet ] && extra="$extra -Dfaultbench.openMap=@WS@/maps/depth-structure-scan.png"
+  [ "$name" = map-sheet ] && extra="$extra -Dfaultbench.openMap=@WS@/maps/demo.mapsheet.json"
   FAULTBENCH_EXTRA_VMARGS="$extra" FAULTBENCH_SCREENSHOT_WAIT=${FAULTBENCH_SCREENSHOT_WAIT:-35} \
     sh "$FAULTBENCH_ROOT/releng/screenshot.sh" "$FAULTBENCH_ROOT/docs/perspective-$name.png"
 done
