@@ -10,7 +10,7 @@ import org.faultbench.core.grid.GridGeometry;
 import org.faultbench.core.grid.RegularGrid;
 import org.faultbench.digitize.io.EsriAsciiGridWriter;
 import org.faultbench.digitize.io.FileUnits;
-import org.faultbench.study.fuzz.FuzzRun;
+import org.faultbench.core.fuzz.FuzzRun;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -4,7 +4,7 @@ import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 
-import org.faultbench.digitize.fuzz.FuzzRun;
+import org.faultbench.core.fuzz.FuzzRun;
 import org.junit.jupiter.api.Test;
 
 /** Mutated XYZ, well-tops CSV, ZMAP+ and ESRI ASCII files either parse or raise {@link FormatException}. */

@@ -4,7 +4,7 @@ import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 
-import org.faultbench.digitize.fuzz.FuzzRun;
+import org.faultbench.core.fuzz.FuzzRun;
 import org.faultbench.digitize.io.FileUnits;
 import org.faultbench.digitize.io.FormatException;
 import org.junit.jupiter.api.Test;

@@ -1,6 +1,4 @@
-package org.faultbench.digitize.fuzz;
-
-import static org.junit.jupiter.api.Assertions.fail;
+package org.faultbench.core.fuzz;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
@@ -21,6 +19,9 @@ import java.util.concurrent.TimeoutException;
  *
  * <p>Inputs per reader: {@value #CI_ITERATIONS} by default (the CI run; fewer for slow readers), or
  * {@code -Dfaultbench.fuzz.iterations=N} (the long profile {@code -Pfuzz-long} sets 1,000,000).
+ *
+ * <p>Test support for every bundle that reads files, kept here (like {@code ElementStub}) because bundles' tests
+ * cannot see each other's classes; it needs no test library, failures are {@link AssertionError}s.
  */
 public final class FuzzRun {
     public static final int CI_ITERATIONS = 3000;
@@ -73,7 +74,7 @@ public final class FuzzRun {
             for (byte[] seed : seeds) {
                 Throwable problem = attempt(watchdog, target, seed, reader, -1, seed);
                 if (problem != null) {
-                    fail(reader + ": a valid seed input does not parse: " + problem, problem);
+                    throw new AssertionError(reader + ": a valid seed input does not parse: " + problem, problem);
                 }
             }
             int inputs = iterations(ciIterations);
@@ -86,7 +87,7 @@ public final class FuzzRun {
                 if (problem == null) {
                     parsed++;
                 } else if (!documented.isInstance(problem)) {
-                    fail(describe(reader, runSeed, i, input) + "\nthrew " + stackTrace(problem));
+                    throw new AssertionError(describe(reader, runSeed, i, input) + "\nthrew " + stackTrace(problem));
                 }
             }
             return new Outcome(reader, inputs, parsed, inputs - parsed);
@@ -109,8 +110,8 @@ public final class FuzzRun {
             return result.get(WATCHDOG_SECONDS, TimeUnit.SECONDS);
         } catch (TimeoutException e) {
             result.cancel(true);
-            fail(describe(reader, seed(), i, shown) + "\nhangs (no answer within " + WATCHDOG_SECONDS + " s)");
-            return null;
+            throw new AssertionError(describe(reader, seed(), i, shown) + "\nhangs (no answer within " + WATCHDOG_SECONDS
+                    + " s)");
         } catch (ExecutionException e) {
             return e.getCause();
         }

@@ -1,4 +1,4 @@
-package org.faultbench.study.fuzz;
+package org.faultbench.core.fuzz;
 
 import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
@@ -11,7 +11,6 @@ import java.util.regex.Pattern;
  * Seeded mutations of valid example files, aimed at what breaks readers: flipped bytes, deleted and duplicated
  * tokens and lines, numbers replaced by NaN, infinities, extremes and huge counts, truncation and splicing of two
  * inputs. The same random source gives the same input, so every failure can be replayed from its seed.
- * (A copy of the digitize bundle's test helper: bundles share no test code.)
  */
 public final class Mutator {
     private static final Pattern NUMBER = Pattern.compile("[-+]?\\d+(\\.\\d*)?([eE][-+]?\\d+)?");
