@@ -67,56 +67,64 @@ public final class AtomicFileStore {
             notes.add("An unfinished backup copy was discarded.");
         }
         Path temporary = sibling(file, TEMPORARY);
-        String mainProblem = problem(file, check);
-        if (mainProblem == null) {
+        Candidate main = Candidate.read(file, check);
+        if (main.valid()) {
             if (Files.deleteIfExists(temporary)) {
                 notes.add("The temporary file of an interrupted save was discarded; the file holds the last"
                         + " completed save.");
             }
-            return new StoredContent(Files.readAllBytes(file), new RecoveryReport(file, RecoveryAction.NONE, notes));
+            return new StoredContent(main.content(), new RecoveryReport(file, RecoveryAction.NONE, notes));
         }
-        notes.add("The file " + mainProblem + ".");
-        String temporaryProblem = problem(temporary, check);
-        if (temporaryProblem == null) {
+        notes.add("The file " + main.problem() + ".");
+        Candidate saving = Candidate.read(temporary, check);
+        if (saving.valid()) {
             setAsideDamaged(file, notes);
             atomicRename(temporary, file);
             forceFolder(file);
-            return restored(file, RecoveryAction.RESTORED_FROM_TEMPORARY, notes);
+            return new StoredContent(saving.content(),
+                    new RecoveryReport(file, RecoveryAction.RESTORED_FROM_TEMPORARY, notes));
         }
-        Path backup = sibling(file, BACKUP);
-        String backupProblem = problem(backup, check);
-        if (backupProblem == null) {
+        Path backupFile = sibling(file, BACKUP);
+        Candidate backup = Candidate.read(backupFile, check);
+        if (backup.valid()) {
             setAsideDamaged(file, notes);
             Files.deleteIfExists(temporary);
             Path copy = sibling(file, TEMPORARY);
-            writeAndForce(copy, Files.readAllBytes(backup));
+            writeAndForce(copy, backup.content());
             atomicRename(copy, file);
             forceFolder(file);
-            return restored(file, RecoveryAction.RESTORED_FROM_BACKUP, notes);
+            return new StoredContent(backup.content(), new RecoveryReport(file, RecoveryAction.RESTORED_FROM_BACKUP,
+                    notes));
         }
-        throw new IOException(file + ": no valid version found: the file " + mainProblem + "; the temporary file "
-                + temporaryProblem + "; the backup " + backupProblem);
+        throw new IOException(file + ": no valid version found: the file " + main.problem() + "; the temporary file "
+                + saving.problem() + "; the backup " + backup.problem());
     }
 
-    private static StoredContent restored(Path file, RecoveryAction action, List<String> notes) throws IOException {
-        return new StoredContent(Files.readAllBytes(file), new RecoveryReport(file, action, notes));
-    }
+    /**
+     * One version of the file as read: its content when it passes the check (the very bytes returned to the caller,
+     * so a file changed after the check is never handed out unchecked), else what is wrong with it.
+     */
+    private record Candidate(byte[] content, String problem) {
 
-    /** Null when {@code candidate} exists and passes the check, otherwise what is wrong with it. */
-    private static String problem(Path candidate, ContentCheck check) {
-        byte[] content;
-        try {
-            content = Files.readAllBytes(candidate);
-        } catch (NoSuchFileException e) {
-            return "is missing";
-        } catch (IOException e) {
-            return "cannot be read (" + e.getMessage() + ")";
+        static Candidate read(Path candidate, ContentCheck check) {
+            byte[] content;
+            try {
+                content = Files.readAllBytes(candidate);
+            } catch (NoSuchFileException e) {
+                return new Candidate(null, "is missing");
+            } catch (IOException e) {
+                return new Candidate(null, "cannot be read (" + e.getMessage() + ")");
+            }
+            try {
+                check.check(content);
+                return new Candidate(content, null);
+            } catch (Exception e) {
+                return new Candidate(null, "is damaged (" + e.getMessage() + ")");
+            }
         }
-        try {
-            check.check(content);
-            return null;
-        } catch (Exception e) {
-            return "is damaged (" + e.getMessage() + ")";
+
+        boolean valid() {
+            return problem == null;
         }
     }
 
