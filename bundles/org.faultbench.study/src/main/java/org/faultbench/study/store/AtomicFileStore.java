@@ -1,7 +1,9 @@
 package org.faultbench.study.store;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.ByteBuffer;
+import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileSystemException;
@@ -145,6 +147,32 @@ public final class AtomicFileStore {
             writeAndForce(staging, Files.readAllBytes(file));
         }
         atomicRename(staging, sibling(file, BACKUP));
+    }
+
+    /** Writes content too large to hold in memory (e.g. a zip archive) to a stream. */
+    @FunctionalInterface
+    interface StreamedContent {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /**
+     * Replaces {@code file} by what {@code content} writes, with the same guarantees as a save (temporary file forced
+     * to disk, atomic rename, folder forced) but no backup: the file appears complete or not at all.
+     */
+    static void replaceStreamed(Path file, StreamedContent content) throws IOException {
+        Path temporary = sibling(file, TEMPORARY);
+        try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
+                StandardOpenOption.TRUNCATE_EXISTING)) {
+            OutputStream out = Channels.newOutputStream(channel);
+            content.writeTo(out);
+            out.flush();
+            channel.force(true);
+        } catch (IOException | RuntimeException failed) {
+            Files.deleteIfExists(temporary);
+            throw failed;
+        }
+        atomicRename(temporary, file);
+        forceFolder(file);
     }
 
     private static void writeAndForce(Path target, byte[] content) throws IOException {

@@ -54,14 +54,15 @@ public final class StudyArchive {
                             && !f.toAbsolutePath().equals(temporary.toAbsolutePath()))
                     .sorted().toList();
         }
-        try (OutputStream out = Files.newOutputStream(temporary); ZipOutputStream zipOut = new ZipOutputStream(out)) {
+        AtomicFileStore.replaceStreamed(zip, out -> {
+            ZipOutputStream zipOut = new ZipOutputStream(out);
             for (Path file : files) {
                 zipOut.putNextEntry(new ZipEntry(workspace.relativize(file).toString().replace('\\', '/')));
                 Files.copy(file, zipOut);
                 zipOut.closeEntry();
             }
-        }
-        Files.move(temporary, zip, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            zipOut.finish();
+        });
     }
 
     /**

@@ -113,4 +113,19 @@ class AtomicFileStoreTest {
         assertTrue(e.getMessage().contains("backup is missing"), e.getMessage());
         assertEquals("garbage", read(file), "an unrecoverable file is left as found");
     }
+
+    @Test
+    void streamedContentReplacesTheFileWholeOrNotAtAll() throws IOException {
+        Path file = dir.resolve("archive.zip");
+        Files.writeString(file, "old");
+        AtomicFileStore.replaceStreamed(file, out -> out.write("new".getBytes(StandardCharsets.UTF_8)));
+        assertEquals("new", Files.readString(file));
+        IOException e = assertThrows(IOException.class, () -> AtomicFileStore.replaceStreamed(file, out -> {
+            out.write("half".getBytes(StandardCharsets.UTF_8));
+            throw new IOException("disk full");
+        }));
+        assertEquals("disk full", e.getMessage());
+        assertEquals("new", Files.readString(file), "a failed write leaves the previous file");
+        assertFalse(Files.exists(AtomicFileStore.sibling(file, AtomicFileStore.TEMPORARY)), "and no temporary file");
+    }
 }
