@@ -6,7 +6,9 @@ import java.util.List;
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 
+import org.faultbench.core.uncertain.UncertainValueNotation;
 import org.faultbench.report.chart.MapWell;
+import org.faultbench.sim.ContributedInput;
 import org.faultbench.study.AnalysisFile;
 
 /** The inputs section: stratigraphy with its distributions, faults, fluids, seal, wells and the other settings. */
@@ -22,6 +24,10 @@ final class InputsSummary {
         blocks.add(stratigraphy(doc));
         blocks.add(faults(doc));
         blocks.add(settings(analysis, doc));
+        List<ContributedInput> contributed = analysis.study().contributedInputs();
+        if (!contributed.isEmpty()) {
+            blocks.add(sampledInputs(contributed));
+        }
         List<MapWell> wells = ReportWells.of(doc, analysis.file().getFileName().toString());
         if (!wells.isEmpty()) {
             List<List<String>> rows = new ArrayList<>();
@@ -32,6 +38,17 @@ final class InputsSummary {
                     0.25));
         }
         return blocks;
+    }
+
+    /** Plug-in inputs with the distributions actually drawn (a plug-in's default may change between versions). */
+    static Block sampledInputs(List<ContributedInput> contributed) {
+        List<List<String>> rows = new ArrayList<>();
+        for (ContributedInput c : contributed) {
+            rows.add(List.of(c.id(), c.input().name(), c.target().description(),
+                    UncertainValueNotation.format(c.distribution(), c.input().bounds())));
+        }
+        return new Block.Table("inputs-sampled", "Sampled inputs from plug-ins, drawn after the built-in inputs in"
+                + " this order", List.of("id", "name", "acts on", "distribution"), rows, 0.2);
     }
 
     private static Block stratigraphy(JsonObject doc) {

@@ -14,6 +14,7 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 
 import org.faultbench.core.units.VolumeUnit;
+import org.faultbench.sim.ContributedInput;
 import org.faultbench.sim.ExceedanceLevel;
 import org.faultbench.sim.LeakLocation;
 import org.faultbench.sim.LeakProbabilityMap;
@@ -111,7 +112,22 @@ public final class ResultsWriter {
         }
         root.add("leakProbability", leaks);
         root.add("inputs", analysis.document());
+        root.add("sampledInputs", sampledInputsJson(analysis.study().contributedInputs()));
         return root;
+    }
+
+    /** The plug-in inputs with the distributions drawn, which the echoed file may leave to the plug-in's default. */
+    private static JsonArray sampledInputsJson(List<ContributedInput> contributed) {
+        JsonArray inputs = new JsonArray();
+        for (ContributedInput c : contributed) {
+            JsonObject input = new JsonObject();
+            input.addProperty("id", c.id());
+            input.addProperty("name", c.input().name());
+            input.addProperty("target", c.target().name());
+            input.add("distribution", UncertainValueFormat.write(c.distribution(), c.input().bounds()));
+            inputs.add(input);
+        }
+        return inputs;
     }
 
     private static JsonArray strings(List<String> values) {

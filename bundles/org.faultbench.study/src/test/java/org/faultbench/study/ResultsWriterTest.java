@@ -62,6 +62,23 @@ class ResultsWriterTest {
     }
 
     @Test
+    void pluginInputsAreWrittenWithTheDistributionDrawn() throws Exception {
+        String json = DomeStudyFiles.VALID_TEMPLATE.replace("CRITERION", "ssf").replace("THICKNESS_A", "30")
+                .replace("\"attic\":", "\"sampledInputs\": [{\"id\": \"ssf-maximum-sealing\"}], \"attic\":");
+        AnalysisFile analysis = new AnalysisFileReader().read(DomeStudyFiles.writeJson(dir, 20, json));
+        SimulationResult result = new MonteCarloSimulator().run(analysis.study(), new SimulationSettings(10, 9, 1, 5),
+                new NullProgressMonitor());
+        Path out = dir.resolve("out");
+        new ResultsWriter("9.9.9-test").write(analysis, result, out);
+        JsonObject input = JsonParser.parseString(Files.readString(out.resolve("results.json"))).getAsJsonObject()
+                .getAsJsonArray("sampledInputs").get(0).getAsJsonObject();
+        assertEquals("ssf-maximum-sealing", input.get("id").getAsString());
+        assertEquals("CRITERION", input.get("target").getAsString());
+        // the file names no distribution: the built-in default, uniform 4 to 7 (Gibson 1994; Lindsay et al. 1993)
+        assertEquals("{\"uniform\":{\"min\":4.0,\"max\":7.0}}", input.get("distribution").toString());
+    }
+
+    @Test
     void quantityKeysAreCamelCase() {
         assertEquals("atticStoiip", ResultsWriter.key(UnitQuantity.ATTIC_STOIIP));
         assertEquals("contact", ResultsWriter.key(UnitQuantity.CONTACT));
