@@ -1,7 +1,7 @@
 #!/bin/sh
 # Screenshots of every stage perspective of the built product on a copy of the demo workspace, into docs/:
 #   releng/screenshots.sh        docs/perspective-map-sheet.png, -fault-review, -stratigraphy, -trap-study
-# Each perspective starts fresh (-clearPersistedState); the Map Sheet one opens the demo scan in the map editor and
+# Each perspective starts fresh (-clearPersistedState); the Map Sheet one opens the demo map sheet (scan and digitized features) in the map editor and
 # the others run the demo study once so results show (-Dfaultbench.autorun).
 set -e
 FAULTBENCH_ROOT=$(cd "$(dirname "$0")/.." && pwd)
