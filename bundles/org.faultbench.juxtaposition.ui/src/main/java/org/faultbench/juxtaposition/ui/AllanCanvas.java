@@ -127,8 +127,9 @@ final class AllanCanvas extends Canvas {
         Rectangle b = image.getBounds();
         gc.drawImage(image, 0, 0, b.width, b.height, p.x, p.y, p.width, p.height);
         drawUnitTops(gc, p);
-        drawDepthLines(gc, p);
-        drawOverlayLabels(gc, p);
+        List<OverlayMark> marks = overlayMarks();
+        drawDepthLines(gc, p, marks);
+        drawOverlayLabels(gc, p, marks);
         drawAxes(gc, p);
         drawLegend(gc, p);
     }
@@ -192,11 +193,11 @@ final class AllanCanvas extends Canvas {
         gc.setLineStyle(SWT.LINE_SOLID);
     }
 
-    private void drawDepthLines(GC gc, Rectangle p) {
+    private void drawDepthLines(GC gc, Rectangle p, List<OverlayMark> marks) {
         gc.setLineWidth(2);
         int labelled = 0;
         List<DepthLine> all = new ArrayList<>(lines);
-        for (OverlayMark mark : overlayMarks()) {
+        for (OverlayMark mark : marks) {
             if (mark.isDepthLine()) {
                 all.add(new DepthLine(mark.text(), mark.z(), rgb(mark.rgb()),
                         mark.dashed() ? SWT.LINE_DASH : SWT.LINE_SOLID));
@@ -223,8 +224,8 @@ final class AllanCanvas extends Canvas {
         gc.setLineStyle(SWT.LINE_SOLID);
     }
 
-    private void drawOverlayLabels(GC gc, Rectangle p) {
-        for (OverlayMark mark : overlayMarks()) {
+    private void drawOverlayLabels(GC gc, Rectangle p, List<OverlayMark> marks) {
+        for (OverlayMark mark : marks) {
             if (!mark.isDepthLine() && mark.z() >= picture.zTop() && mark.z() <= picture.zBase()
                     && mark.u() >= picture.uMin() && mark.u() <= picture.uMax()) {
                 Color c = new Color(rgb(mark.rgb()));
