@@ -1,9 +1,9 @@
 package org.faultbench.seal;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /**
  * The seal criteria a project can choose from, by id, in registration order. Plain Java so that the built-ins work
@@ -11,7 +11,7 @@ import java.util.Optional;
  */
 public final class SealCriterionCatalog {
 
-    private final Map<String, SealCriterion> criteria = new LinkedHashMap<>();
+    private final IdRegistry<SealCriterion> criteria = new IdRegistry<>("seal criterion", SealCriterion::name);
 
     /**
      * A catalog with the built-ins in their default configuration: juxtaposition only, SGR (Bretan et al. 2003),
@@ -27,22 +27,15 @@ public final class SealCriterionCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is empty or already taken */
-    public synchronized void register(SealCriterion criterion) {
-        if (criterion == null || criterion.id() == null || criterion.id().isBlank()) {
-            throw new IllegalArgumentException("seal criterion or its id is missing: " + criterion);
-        }
-        if (criteria.containsKey(criterion.id())) {
-            throw new IllegalArgumentException("seal criterion id '" + criterion.id() + "' is already registered by "
-                    + criteria.get(criterion.id()).name());
-        }
-        criteria.put(criterion.id(), criterion);
+    public void register(SealCriterion criterion) {
+        criteria.register(criterion == null ? null : criterion.id(), criterion);
     }
 
-    public synchronized Optional<SealCriterion> find(String id) {
-        return Optional.ofNullable(criteria.get(id));
+    public Optional<SealCriterion> find(String id) {
+        return criteria.find(id);
     }
 
-    public synchronized List<SealCriterion> list() {
-        return List.copyOf(criteria.values());
+    public List<SealCriterion> list() {
+        return criteria.list();
     }
 }

@@ -1,14 +1,14 @@
 package org.faultbench.digitize.georef;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /** The georeference transform types a map sheet can be fitted with, by id, in registration order. */
 public final class TransformCatalog {
 
-    private final Map<String, TransformType> types = new LinkedHashMap<>();
+    private final IdRegistry<TransformType> types = new IdRegistry<>("transform", TransformType::name);
 
     /** The built-in kinds, stiffest first, as the bundle's plugin.xml contributes them. */
     public static TransformCatalog withBuiltIns() {
@@ -20,23 +20,19 @@ public final class TransformCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is already taken */
-    public synchronized void register(TransformType type) {
-        if (types.containsKey(type.id())) {
-            throw new IllegalArgumentException("transform id '" + type.id() + "' is already registered by "
-                    + types.get(type.id()).name());
-        }
-        types.put(type.id(), type);
+    public void register(TransformType type) {
+        types.register(type == null ? null : type.id(), type);
     }
 
-    public synchronized Optional<TransformType> find(String id) {
-        return Optional.ofNullable(types.get(id));
+    public Optional<TransformType> find(String id) {
+        return types.find(id);
     }
 
-    public synchronized List<TransformType> list() {
-        return List.copyOf(types.values());
+    public List<TransformType> list() {
+        return types.list();
     }
 
-    public synchronized List<String> ids() {
-        return List.copyOf(types.keySet());
+    public List<String> ids() {
+        return types.ids();
     }
 }

@@ -1,16 +1,16 @@
 package org.faultbench.digitize.importer;
 
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /** The importers the workbench offers, by id, and which of them read a given file ("which importers read .asc?"). */
 public final class ImporterCatalog {
 
-    private final Map<String, ImporterType> importers = new LinkedHashMap<>();
+    private final IdRegistry<ImporterType> importers = new IdRegistry<>("importer", ImporterType::name);
 
     /** The built-in readers, as the bundle's plugin.xml contributes them. */
     public static ImporterCatalog withBuiltIns() {
@@ -20,39 +20,35 @@ public final class ImporterCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is already taken */
-    public synchronized void register(ImporterType type) {
-        if (importers.containsKey(type.id())) {
-            throw new IllegalArgumentException("importer id '" + type.id() + "' is already registered by "
-                    + importers.get(type.id()).name());
-        }
-        importers.put(type.id(), type);
+    public void register(ImporterType type) {
+        importers.register(type == null ? null : type.id(), type);
     }
 
-    public synchronized Optional<ImporterType> find(String id) {
-        return Optional.ofNullable(importers.get(id));
+    public Optional<ImporterType> find(String id) {
+        return importers.find(id);
     }
 
-    public synchronized List<ImporterType> list() {
-        return List.copyOf(importers.values());
+    public List<ImporterType> list() {
+        return importers.list();
     }
 
-    public synchronized List<String> ids() {
-        return List.copyOf(importers.keySet());
+    public List<String> ids() {
+        return importers.ids();
     }
 
     /** Importers for a file extension ("asc", ".ASC"), in registration order. */
-    public synchronized List<ImporterType> forExtension(String extension) {
+    public List<ImporterType> forExtension(String extension) {
         String wanted = extension.toLowerCase(Locale.ROOT).replaceFirst("^\\.", "");
-        return importers.values().stream().filter(t -> t.extensions().contains(wanted)).toList();
+        return importers.matching(t -> t.extensions().contains(wanted));
     }
 
     /** Importers whose extensions match the file's name, in registration order. */
-    public synchronized List<ImporterType> forFile(Path file) {
-        return importers.values().stream().filter(t -> t.reads(file)).toList();
+    public List<ImporterType> forFile(Path file) {
+        return importers.matching(t -> t.reads(file));
     }
 
     /** Importers producing a kind of data, e.g. every grid reader for an isochore. */
-    public synchronized List<ImporterType> ofKind(DataKind kind) {
-        return importers.values().stream().filter(t -> t.kind() == kind).toList();
+    public List<ImporterType> ofKind(DataKind kind) {
+        return importers.matching(t -> t.kind() == kind);
     }
 }

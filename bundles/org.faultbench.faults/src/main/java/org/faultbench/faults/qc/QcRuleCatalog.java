@@ -1,10 +1,10 @@
 package org.faultbench.faults.qc;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /**
  * The fault QC rules of a project, by id, in registration order, and the run of all of them over one fault. Plain
@@ -12,7 +12,7 @@ import java.util.Optional;
  */
 public final class QcRuleCatalog {
 
-    private final Map<String, FaultQcRule> rules = new LinkedHashMap<>();
+    private final IdRegistry<FaultQcRule> rules = new IdRegistry<>("fault QC rule", FaultQcRule::name);
 
     /** A catalog with the built-in rules in their default settings. */
     public static QcRuleCatalog withBuiltIns() {
@@ -29,23 +29,16 @@ public final class QcRuleCatalog {
     }
 
     /** @throws IllegalArgumentException when the rule or its id is missing or the id is already taken */
-    public synchronized void register(FaultQcRule rule) {
-        if (rule == null || rule.id() == null || rule.id().isBlank()) {
-            throw new IllegalArgumentException("fault QC rule or its id is missing: " + rule);
-        }
-        if (rules.containsKey(rule.id())) {
-            throw new IllegalArgumentException("fault QC rule id '" + rule.id() + "' is already registered by "
-                    + rules.get(rule.id()).name());
-        }
-        rules.put(rule.id(), rule);
+    public void register(FaultQcRule rule) {
+        rules.register(rule == null ? null : rule.id(), rule);
     }
 
-    public synchronized Optional<FaultQcRule> find(String id) {
-        return Optional.ofNullable(rules.get(id));
+    public Optional<FaultQcRule> find(String id) {
+        return rules.find(id);
     }
 
-    public synchronized List<FaultQcRule> list() {
-        return List.copyOf(rules.values());
+    public List<FaultQcRule> list() {
+        return rules.list();
     }
 
     /**

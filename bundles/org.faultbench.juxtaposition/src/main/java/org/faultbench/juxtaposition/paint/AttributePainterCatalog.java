@@ -1,14 +1,14 @@
 package org.faultbench.juxtaposition.paint;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /** The painters the Allan diagram offers, by id, in registration order. */
 public final class AttributePainterCatalog {
 
-    private final Map<String, AttributePainter> painters = new LinkedHashMap<>();
+    private final IdRegistry<AttributePainter> painters = new IdRegistry<>("attribute painter", AttributePainter::name);
 
     /** The built-ins, as the bundle's plugin.xml contributes them. */
     public static AttributePainterCatalog withBuiltIns() {
@@ -18,23 +18,19 @@ public final class AttributePainterCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is already taken */
-    public synchronized void register(AttributePainter painter) {
-        if (painters.containsKey(painter.id())) {
-            throw new IllegalArgumentException("attribute painter id '" + painter.id() + "' is already registered by "
-                    + painters.get(painter.id()).name());
-        }
-        painters.put(painter.id(), painter);
+    public void register(AttributePainter painter) {
+        painters.register(painter == null ? null : painter.id(), painter);
     }
 
-    public synchronized Optional<AttributePainter> find(String id) {
-        return Optional.ofNullable(painters.get(id));
+    public Optional<AttributePainter> find(String id) {
+        return painters.find(id);
     }
 
-    public synchronized List<AttributePainter> list() {
-        return List.copyOf(painters.values());
+    public List<AttributePainter> list() {
+        return painters.list();
     }
 
-    public synchronized List<String> ids() {
-        return List.copyOf(painters.keySet());
+    public List<String> ids() {
+        return painters.ids();
     }
 }

@@ -1,14 +1,14 @@
 package org.faultbench.juxtaposition.paint;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /** The overlays the Allan diagram can draw, by id, in registration order. */
 public final class OverlayCatalog {
 
-    private final Map<String, Overlay> overlays = new LinkedHashMap<>();
+    private final IdRegistry<Overlay> overlays = new IdRegistry<>("overlay", Overlay::name);
 
     /** The built-in overlay, as the bundle's plugin.xml contributes it. */
     public static OverlayCatalog withBuiltIns() {
@@ -18,23 +18,19 @@ public final class OverlayCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is already taken */
-    public synchronized void register(Overlay overlay) {
-        if (overlays.containsKey(overlay.id())) {
-            throw new IllegalArgumentException("overlay id '" + overlay.id() + "' is already registered by "
-                    + overlays.get(overlay.id()).name());
-        }
-        overlays.put(overlay.id(), overlay);
+    public void register(Overlay overlay) {
+        overlays.register(overlay == null ? null : overlay.id(), overlay);
     }
 
-    public synchronized Optional<Overlay> find(String id) {
-        return Optional.ofNullable(overlays.get(id));
+    public Optional<Overlay> find(String id) {
+        return overlays.find(id);
     }
 
-    public synchronized List<Overlay> list() {
-        return List.copyOf(overlays.values());
+    public List<Overlay> list() {
+        return overlays.list();
     }
 
-    public synchronized List<String> ids() {
-        return List.copyOf(overlays.keySet());
+    public List<String> ids() {
+        return overlays.ids();
     }
 }

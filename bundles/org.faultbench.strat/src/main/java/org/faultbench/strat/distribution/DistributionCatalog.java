@@ -1,9 +1,9 @@
 package org.faultbench.strat.distribution;
 
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+
+import org.faultbench.core.extension.IdRegistry;
 
 /** The contributed parameterisations of uncertain inputs, by id, in registration order. */
 public final class DistributionCatalog {
@@ -15,7 +15,7 @@ public final class DistributionCatalog {
     public static final List<String> RESERVED_IDS = List.of("normal", "truncatedNormal", "uniform", "triangular",
             "lognormal", "isochore", "scale");
 
-    private final Map<String, DistributionType> types = new LinkedHashMap<>();
+    private final IdRegistry<DistributionType> types = new IdRegistry<>("distribution", DistributionType::name);
 
     /** The built-ins, as the bundle's plugin.xml contributes them. */
     public static DistributionCatalog withBuiltIns() {
@@ -25,27 +25,23 @@ public final class DistributionCatalog {
     }
 
     /** @throws IllegalArgumentException when the id is reserved or already taken */
-    public synchronized void register(DistributionType type) {
-        if (RESERVED_IDS.contains(type.id())) {
+    public void register(DistributionType type) {
+        if (type != null && RESERVED_IDS.contains(type.id())) {
             throw new IllegalArgumentException("id '" + type.id() + "' is reserved by the analysis file format "
                     + RESERVED_IDS);
         }
-        if (types.containsKey(type.id())) {
-            throw new IllegalArgumentException("distribution id '" + type.id() + "' is already registered by "
-                    + types.get(type.id()).name());
-        }
-        types.put(type.id(), type);
+        types.register(type == null ? null : type.id(), type);
     }
 
-    public synchronized Optional<DistributionType> find(String id) {
-        return Optional.ofNullable(types.get(id));
+    public Optional<DistributionType> find(String id) {
+        return types.find(id);
     }
 
-    public synchronized List<DistributionType> list() {
-        return List.copyOf(types.values());
+    public List<DistributionType> list() {
+        return types.list();
     }
 
-    public synchronized List<String> ids() {
-        return List.copyOf(types.keySet());
+    public List<String> ids() {
+        return types.ids();
     }
 }
