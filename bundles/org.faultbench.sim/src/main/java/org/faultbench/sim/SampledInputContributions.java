@@ -22,7 +22,7 @@ public final class SampledInputContributions {
     private SampledInputContributions() {
     }
 
-    /** The inputs that come with the simulator, by id. */
+    /** The inputs that come with the simulator, by id, as the bundle's plugin.xml contributes them. */
     public static Map<String, SampledInput> builtIns() {
         Map<String, SampledInput> inputs = new LinkedHashMap<>();
         SampledInput ssf = new MaximumSealingSsfInput();
@@ -31,14 +31,18 @@ public final class SampledInputContributions {
     }
 
     /**
-     * The inputs a study may name: the built-ins plus every valid contribution of the running platform, by id (just
-     * the built-ins outside OSGi). Read once.
+     * The inputs a study may name, by id: every valid contribution of the running platform, the built-ins among them
+     * (just the built-ins outside OSGi). Read once.
      */
     public static synchronized Map<String, SampledInput> platformInputs() {
         if (platformInputs == null) {
-            Map<String, SampledInput> inputs = builtIns();
-            ContributionReader.log(SampledInputContributions.class,
-                    readInto(inputs, ContributionReader.platformElements(POINT)));
+            Map<String, SampledInput> inputs = new LinkedHashMap<>();
+            if (ContributionReader.registryAvailable()) {
+                ContributionReader.log(SampledInputContributions.class,
+                        readInto(inputs, ContributionReader.platformElements(POINT)));
+            } else {
+                inputs.putAll(builtIns());
+            }
             platformInputs = Collections.unmodifiableMap(inputs);
         }
         return platformInputs;

@@ -85,4 +85,14 @@ class ExtensionContributionsTest {
         assertEquals(List.of("ssf-maximum-sealing"), List.copyOf(SampledInputContributions.platformInputs().keySet()),
                 "outside OSGi only the built-in inputs");
     }
+
+    @Test
+    void pluginXmlContributesEveryBuiltInInput() throws Exception {
+        String pluginXml = Files.readString(Path.of(System.getProperty("sim.bundle.dir", "."), "plugin.xml"));
+        for (SampledInput input : SampledInputContributions.builtIns().values()) {
+            assertTrue(pluginXml.contains("<input id=\"" + input.id() + "\" name=\"" + input.name() + "\""),
+                    input.id());
+            assertTrue(pluginXml.contains("class=\"" + input.getClass().getName() + "\""), input.id());
+        }
+    }
 }
