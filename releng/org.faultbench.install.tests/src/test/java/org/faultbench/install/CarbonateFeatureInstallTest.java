@@ -32,8 +32,13 @@ class CarbonateFeatureInstallTest {
     }
 
     private static Run analyze(Path product, Path out) throws IOException, InterruptedException {
+        return analyze(product, CASE, out);
+    }
+
+    private static Run analyze(Path product, Path analysisFile, Path out) throws IOException, InterruptedException {
         List<String> command = new ArrayList<>(List.of("sh", product.resolve("faultbench.sh").toString(),
-                "-application", "org.faultbench.headless.batch", "analyze", CASE.toString(), "--realisations", "200",
+                "-application", "org.faultbench.headless.batch", "analyze", analysisFile.toString(), "--realisations",
+                "200",
                 "--seed", "7", "--out", out.toString(), "--no-report"));
         Process process = new ProcessBuilder(command).redirectErrorStream(true).start();
         String output = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
@@ -84,5 +89,22 @@ class CarbonateFeatureInstallTest {
         assertEquals(0, extended.exitCode(), extended.output());
         String results = Files.readString(out.resolve("extended/results.json"));
         assertTrue(results.contains("carbonate-fault-rock"), "results name the installed criterion");
+    }
+
+    /** The plug-in registry of the running product, not the fallback of plain unit tests, supplies the input. */
+    @Test
+    void theProductsContributedSampledInputIsDrawnWhenAStudyNamesIt(@TempDir Path work) throws Exception {
+        Path folder = Files.createDirectories(work.resolve("case"));
+        Files.copy(CASE.resolveSibling("top-reef-a.asc"), folder.resolve("top-reef-a.asc"));
+        String json = Files.readString(CASE);
+        int seal = json.indexOf("\"seal\":");
+        int simulation = json.indexOf("\"simulation\":");
+        Path study = Files.writeString(folder.resolve("ssf-study.json"), json.substring(0, seal)
+                + "\"seal\": {\"criterion\": \"ssf\", \"burialDepth\": 2000},\n"
+                + "  \"sampledInputs\": [{\"id\": \"ssf-maximum-sealing\"}],\n  " + json.substring(simulation));
+        Run run = analyze(PLAIN, study, work.resolve("out"));
+        assertEquals(0, run.exitCode(), run.output());
+        String results = Files.readString(work.resolve("out/results.json"));
+        assertTrue(results.contains("\"target\": \"CRITERION\""), "results list the drawn input: " + results);
     }
 }
