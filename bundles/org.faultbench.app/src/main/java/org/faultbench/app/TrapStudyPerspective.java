@@ -5,8 +5,8 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
 /**
- * Trap analysis and results: the Allan diagram in the centre, the results below it, stratigraphy and throw profiles
- * beside, so an edit of the inputs and its effect on the contacts are seen together.
+ * Trap analysis and results: the Allan diagram in the centre, the results below it, stratigraphy, throw profiles and
+ * plug-in inputs beside, so an edit of the inputs and its effect on the contacts are seen together.
  */
 public class TrapStudyPerspective implements IPerspectiveFactory {
     public static final String ID = "org.faultbench.app.perspective.trapStudy";
@@ -19,6 +19,7 @@ public class TrapStudyPerspective implements IPerspectiveFactory {
                 editorArea);
         right.addView(ViewIds.STRATIGRAPHY);
         right.addView(ViewIds.THROW_PROFILES);
+        right.addView(ViewIds.SAMPLED_INPUTS);
         layout.addView(ViewIds.RESULTS, IPageLayout.BOTTOM, 0.5f, editorArea);
         layout.addView(ViewIds.ALLAN, IPageLayout.TOP, 0.5f, editorArea);
         layout.addPlaceholder(ViewIds.MAP_SHEET, IPageLayout.LEFT, 0.22f, editorArea);

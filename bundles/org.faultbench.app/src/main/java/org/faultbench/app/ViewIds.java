@@ -10,6 +10,7 @@ final class ViewIds {
     static final String THROW_PROFILES = "org.faultbench.faults.ui.throwProfiles";
     static final String DISPLACEMENT_LENGTH = "org.faultbench.faults.ui.displacementLength";
     static final String STRATIGRAPHY = "org.faultbench.strat.ui.stratigraphyEditor";
+    static final String SAMPLED_INPUTS = "org.faultbench.strat.ui.sampledInputs";
     static final String ALLAN = "org.faultbench.juxtaposition.ui.allanDiagram";
     static final String RESULTS = "org.faultbench.sim.ui.results";
     static final String PROBLEMS = "org.eclipse.ui.views.ProblemView";

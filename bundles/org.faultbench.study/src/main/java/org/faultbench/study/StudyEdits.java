@@ -1,11 +1,13 @@
 package org.faultbench.study;
 
+import com.google.gson.JsonArray;
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import com.google.gson.JsonPrimitive;
 
 import org.faultbench.core.LithologyClass;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.sim.SampledInput;
 
 /**
  * Edits of an open study. Each edit changes the analysis file's JSON (so saving writes exactly what the user sees,
@@ -35,6 +37,53 @@ public final class StudyEdits {
             throws StudyFormatException {
         return withUnitField(analysis, unitIndex, "lithology",
                 new JsonPrimitive(lithology.name().toLowerCase(java.util.Locale.ROOT)));
+    }
+
+    /**
+     * The study with the plug-in sampled {@code input} included (with {@code distribution}, or the input's own when
+     * null) or, when {@code included} is false, left out. An input already listed keeps its place in the draw order;
+     * a new one is drawn last.
+     */
+    public static AnalysisFile withSampledInput(AnalysisFile analysis, SampledInput input, boolean included,
+            UncertainValue distribution) throws StudyFormatException {
+        String id = input.id();
+        JsonObject document = analysis.document().deepCopy();
+        JsonArray inputs = document.has("sampledInputs") && document.get("sampledInputs").isJsonArray()
+                ? document.getAsJsonArray("sampledInputs") : new JsonArray();
+        int at = -1;
+        for (int k = 0; k < inputs.size(); k++) {
+            JsonElement entry = inputs.get(k);
+            if (entry.isJsonObject() && entry.getAsJsonObject().has("id")
+                    && id.equals(entry.getAsJsonObject().get("id").getAsString())) {
+                at = k;
+            }
+        }
+        if (!included) {
+            if (at >= 0) {
+                inputs.remove(at);
+            }
+        } else {
+            JsonObject entry = new JsonObject();
+            entry.addProperty("id", id);
+            if (distribution != null) {
+                try {
+                    entry.add("distribution", UncertainValueFormat.write(distribution, input.bounds()));
+                } catch (IllegalArgumentException e) {
+                    throw new StudyFormatException(analysis.file().toString(), "sampledInputs", e.getMessage(), e);
+                }
+            }
+            if (at >= 0) {
+                inputs.set(at, entry);
+            } else {
+                inputs.add(entry);
+            }
+        }
+        if (inputs.isEmpty()) {
+            document.remove("sampledInputs");
+        } else {
+            document.add("sampledInputs", inputs);
+        }
+        return new AnalysisFileReader().read(analysis.file(), StudyJson.pretty(document));
     }
 
     /** The analysis file's text as it would be saved: the edited JSON, pretty-printed. */

@@ -1,6 +1,7 @@
 package org.faultbench.study;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -8,9 +9,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import org.faultbench.core.LithologyClass;
 import org.faultbench.core.uncertain.UncertainValue;
+import org.faultbench.sim.ContributedInput;
+import org.faultbench.sim.MaximumSealingSsfInput;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -49,6 +53,26 @@ class StudyEditsTest {
                 UncertainValue.fixed(55));
         assertSame(original.study().referenceTop(), edited.study().referenceTop(),
                 "the reference-top grid file is not parsed again for a stratigraphy edit");
+    }
+
+    @Test
+    void aPluginInputIsIncludedWithItsDistributionAndLeftOutAgain() throws Exception {
+        AnalysisFile original = dome();
+        MaximumSealingSsfInput ssf = new MaximumSealingSsfInput();
+        AnalysisFile included = StudyEdits.withSampledInput(original, ssf, true, null);
+        List<ContributedInput> inputs = included.study().contributedInputs();
+        assertEquals(List.of("ssf-maximum-sealing"), inputs.stream().map(ContributedInput::id).toList());
+        assertEquals(ssf.distribution(), inputs.get(0).distribution(), "the input's own distribution");
+        AnalysisFile narrowed = StudyEdits.withSampledInput(included, ssf, true, UncertainValue.triangular(4, 5, 6));
+        assertEquals(UncertainValue.triangular(4, 5, 6), narrowed.study().contributedInputs().get(0).distribution());
+        assertEquals("[{\"id\":\"ssf-maximum-sealing\",\"distribution\":{\"triangular\":{\"min\":4.0,\"mode\":5.0,"
+                + "\"max\":6.0}}}]", narrowed.document().get("sampledInputs").toString());
+        AnalysisFile removed = StudyEdits.withSampledInput(narrowed, ssf, false, null);
+        assertTrue(removed.study().contributedInputs().isEmpty());
+        assertFalse(removed.document().has("sampledInputs"), "no empty list is left in the file");
+        StudyFormatException e = assertThrows(StudyFormatException.class,
+                () -> StudyEdits.withSampledInput(original, ssf, true, UncertainValue.uniform(0.2, 3)));
+        assertEquals("sampledInputs[0].distribution", e.field(), "below the input's bound of 1");
     }
 
     @Test

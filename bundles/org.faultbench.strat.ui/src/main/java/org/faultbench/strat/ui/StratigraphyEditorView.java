@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.eclipse.core.commands.ExecutionException;
 import org.eclipse.core.commands.operations.IUndoContext;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.jface.viewers.ArrayContentProvider;
@@ -39,7 +38,6 @@ import org.faultbench.study.ActiveStudy;
 import org.faultbench.study.AnalysisFile;
 import org.faultbench.study.AnalysisFileSaver;
 import org.faultbench.study.StudyEdits;
-import org.faultbench.study.StudyFormatException;
 import org.faultbench.study.UnitProperty;
 
 /**
@@ -171,22 +169,9 @@ public class StratigraphyEditorView extends ViewPart implements ISaveablePart {
                 a, () -> StudyEdits.withUnitProperty(a, row.index(), property, value)));
     }
 
-    private interface Edit {
-        AnalysisFile make() throws StudyFormatException;
-    }
-
     /** Runs an edit as an undoable operation, or reports why the study would not accept it. */
-    private void execute(String label, AnalysisFile before, Edit edit) {
-        try {
-            AnalysisFile after = edit.make();
-            PlatformUI.getWorkbench().getOperationSupport().getOperationHistory()
-                    .execute(new UnitEditOperation(label, undoContext, before, after), null, null);
-            showProblem(null);
-        } catch (StudyFormatException e) {
-            showProblem(e.getMessage());
-        } catch (ExecutionException e) {
-            showProblem(e.getMessage());
-        }
+    private void execute(String label, AnalysisFile before, StudyEditRunner.Edit edit) {
+        showProblem(StudyEditRunner.run(label, undoContext, before, edit));
     }
 
     private void showProblem(String message) {

@@ -23,10 +23,11 @@ class PerspectivesTest {
             List.of("org.faultbench.faults.ui.throwProfiles", "org.faultbench.faults.ui.displacementLength",
                     "org.eclipse.ui.views.ProblemView"),
             "org.faultbench.app.perspective.stratigraphy",
-            List.of("org.faultbench.strat.ui.stratigraphyEditor", "org.faultbench.juxtaposition.ui.allanDiagram",
-                    "org.faultbench.sim.ui.results"),
+            List.of("org.faultbench.strat.ui.stratigraphyEditor", "org.faultbench.strat.ui.sampledInputs",
+                    "org.faultbench.juxtaposition.ui.allanDiagram", "org.faultbench.sim.ui.results"),
             "org.faultbench.app.perspective.trapStudy",
-            List.of("org.faultbench.juxtaposition.ui.allanDiagram", "org.faultbench.sim.ui.results"));
+            List.of("org.faultbench.juxtaposition.ui.allanDiagram", "org.faultbench.sim.ui.results",
+                    "org.faultbench.strat.ui.sampledInputs"));
 
     static IWorkbenchPage open(String perspectiveId) {
         IWorkbenchPage page = PlatformUI.getWorkbench().getActiveWorkbenchWindow().getActivePage();

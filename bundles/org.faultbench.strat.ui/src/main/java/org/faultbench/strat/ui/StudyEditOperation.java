@@ -10,14 +10,14 @@ import org.faultbench.study.ActiveStudy;
 import org.faultbench.study.AnalysisFile;
 
 /**
- * One accepted edit of the stratigraphy, undoable through the workbench's operation history: it swaps the active
+ * One accepted edit of the study (its stratigraphy or its plug-in inputs), undoable through the workbench's operation history: it swaps the active
  * study between the version before and the version after the edit. Both versions are complete, validated values.
  */
-final class UnitEditOperation extends AbstractOperation {
+final class StudyEditOperation extends AbstractOperation {
     private final AnalysisFile before;
     private final AnalysisFile after;
 
-    UnitEditOperation(String label, IUndoContext context, AnalysisFile before, AnalysisFile after) {
+    StudyEditOperation(String label, IUndoContext context, AnalysisFile before, AnalysisFile after) {
         super(label);
         addContext(context);
         this.before = before;
