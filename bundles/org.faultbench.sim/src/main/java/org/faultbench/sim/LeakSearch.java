@@ -206,14 +206,14 @@ final class LeakSearch {
                 // the units overlap where b[i] - b[j + 1] < throw < b[i + 1] - b[j], up to rounding
                 int first = columns.firstFrom(b[i] - b[j + 1], boundaryMagnitude);
                 int end = columns.firstAbove(b[i + 1] - b[j], boundaryMagnitude);
-                if (attic || leakRuns == null) {
-                    scanPair(frame, columns, s, i, j, first, end);
-                } else {
-                    for (int from = first, to; from < end; from = to) {
-                        to = columns.blockEnd(from, end);
-                        if (!blockStartsTooDeep(columns, s, i, j, from)) {
-                            markPairBlock(frame, columns, s, i, j, from, to);
-                        }
+                for (int from = first, to; from < end; from = to) {
+                    to = columns.blockEnd(from, end);
+                    if (blockStartsTooDeep(columns, s, i, j, from)) {
+                        continue; // as scanPair would pass over each window: the depth of interest only rises
+                    } else if (attic || leakRuns == null) {
+                        scanPair(frame, columns, s, i, j, from, to);
+                    } else {
+                        markPairBlock(frame, columns, s, i, j, from, to);
                     }
                 }
             }

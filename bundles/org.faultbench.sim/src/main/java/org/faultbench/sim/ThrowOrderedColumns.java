@@ -59,22 +59,29 @@ final class ThrowOrderedColumns {
      */
     boolean realise(RealisationInputs in, double scale) {
         double largest = 0;
+        boolean notANumber = false;
         boolean constantError = in.residual() == null;
         double error = in.depthError(0, 0);
-        Arrays.fill(blockShallowestFootwall, Double.POSITIVE_INFINITY);
-        for (int p = 0; p < order.length; p++) {
-            double zFw = nominalFootwall[p]
-                    + (constantError ? error : in.depthError(frame.x[order[p]], frame.y[order[p]]));
-            double throwK = scale * nominalThrow[p];
-            double zHw = zFw + throwK;
-            footwall[p] = zFw;
-            hangingWall[p] = zHw;
-            scaledThrow[p] = throwK;
-            largest = Math.max(largest, Math.max(Math.abs(zFw), Math.abs(zHw)));
-            blockShallowestFootwall[p / BLOCK] = Math.min(blockShallowestFootwall[p / BLOCK], zFw);
+        for (int from = 0; from < order.length; from += BLOCK) {
+            double shallowest = Double.POSITIVE_INFINITY;
+            for (int p = from, to = Math.min(order.length, from + BLOCK); p < to; p++) {
+                double zFw = nominalFootwall[p]
+                        + (constantError ? error : in.depthError(frame.x[order[p]], frame.y[order[p]]));
+                double throwK = scale * nominalThrow[p];
+                double zHw = zFw + throwK;
+                footwall[p] = zFw;
+                hangingWall[p] = zHw;
+                scaledThrow[p] = throwK;
+                // comparisons, not Math.max, which waits for NaN checks each step: NaN is caught apart
+                double larger = Math.abs(zFw) > Math.abs(zHw) ? Math.abs(zFw) : Math.abs(zHw);
+                largest = larger > largest ? larger : largest;
+                notANumber |= zFw != zFw | zHw != zHw;
+                shallowest = zFw < shallowest ? zFw : shallowest;
+            }
+            blockShallowestFootwall[from / BLOCK] = shallowest;
         }
         magnitude = largest;
-        return Double.isFinite(largest) && !(scale < 0) && Double.isFinite(scale);
+        return !notANumber && Double.isFinite(largest) && !(scale < 0) && Double.isFinite(scale);
     }
 
     int count() {
