@@ -32,6 +32,8 @@ final class FaultPlaneFrame {
     final double zTop;
     final double cellHeight;
     private final double inverseCellHeight;
+    /** Depth of the centre of row 0, as {@link #rowCentre} gives it. */
+    private final double firstCentre;
     final int rows;
     private final double[] rowCentres;
     /** See {@link #rowCentredAtOrBelow}: 0.5 turns the shortcut off for a frame too large to vouch for it. */
@@ -80,6 +82,7 @@ final class FaultPlaneFrame {
         for (int row = 0; row < rows; row++) {
             rowCentres[row] = zTop + (row + 0.5) * cellHeight;
         }
+        firstCentre = zTop + 0.5 * cellHeight;
         estimateTolerance = Math.abs(zTop) * inverseCellHeight + rows < MAX_ROWS_FOR_SHORTCUT ? ESTIMATE_TOLERANCE : 0.5;
     }
 
@@ -106,10 +109,14 @@ final class FaultPlaneFrame {
      * the estimate from the reciprocal height may be off by one either way, and the steps after it correct that.
      */
     int firstRowCentredAtOrBelow(double z) {
-        return rowCentredAtOrBelow(z, zTop, inverseCellHeight, rowCentres, rows, estimateTolerance);
+        return rowCentredAtOrBelow(z, firstCentre, inverseCellHeight, rowCentres, rows, estimateTolerance);
     }
 
     /** The arguments {@link #rowCentredAtOrBelow} takes for this frame, for a loop that keeps them in locals. */
+    double firstCentre() {
+        return firstCentre;
+    }
+
     double inverseCellHeight() {
         return inverseCellHeight;
     }
@@ -124,15 +131,15 @@ final class FaultPlaneFrame {
 
     /**
      * {@link #firstRowCentredAtOrBelow} with the frame's numbers as arguments, so that a loop over millions of windows
-     * keeps them in registers. The row is ceil(x), x = (z - zTop) / h - 0.5, when x lies clear of a whole number:
-     * computing x rounds three times and the centres once each, which in a frame of fewer than
-     * {@value #MAX_ROWS_FOR_SHORTCUT} rows (|zTop| / h included) moves x against the centres by less than 10^-7 rows
-     * (6 · 2^-53 · 10^8), well inside {@link #ESTIMATE_TOLERANCE}. Otherwise, and outside the frame, the estimate is
-     * checked against the centres themselves.
+     * keeps them in registers. The row is ceil(x), x = (z - c0) / h with c0 the first centre, when x lies clear of a
+     * whole number: computing x rounds four times (c0, the difference, 1 / h, the product) and each centre once, which
+     * in a frame of fewer than {@value #MAX_ROWS_FOR_SHORTCUT} rows (|zTop| / h included) moves x against the centres
+     * by less than 10^-7 rows (6 · 2^-53 · 10^8), well inside {@link #ESTIMATE_TOLERANCE}. Otherwise, and outside the
+     * frame, the estimate is checked against the centres themselves.
      */
-    static int rowCentredAtOrBelow(double z, double zTop, double inverseCellHeight, double[] centres, int rows,
-            double tolerance) {
-        double x = (z - zTop) * inverseCellHeight - 0.5;
+    static int rowCentredAtOrBelow(double z, double firstCentre, double inverseCellHeight, double[] centres,
+            int rows, double tolerance) {
+        double x = (z - firstCentre) * inverseCellHeight;
         double estimate = Math.ceil(x);
         double gap = estimate - x;
         if (gap > tolerance && gap < 1 - tolerance && estimate >= 0 && estimate <= rows) {

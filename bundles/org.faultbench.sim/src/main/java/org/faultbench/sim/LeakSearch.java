@@ -270,7 +270,7 @@ final class LeakSearch {
         double spillDepth = spill[s];
         double leakDepth = leak[s];
         double interestDepth = interest[s];
-        double zTop = frame.zTop;
+        double firstCentre = frame.firstCentre();
         double inverseCellHeight = frame.inverseCellHeight();
         double[] centres = frame.rowCentres();
         int rows = frame.rows;
@@ -289,9 +289,9 @@ final class LeakSearch {
                     interestDepth = interest[s];
                 }
             }
-            int first = FaultPlaneFrame.rowCentredAtOrBelow(top, zTop, inverseCellHeight, centres, rows, tolerance);
-            int end = FaultPlaneFrame.rowCentredAtOrBelow(Math.min(base, spillDepth), zTop, inverseCellHeight, centres,
-                    rows, tolerance);
+            int first = FaultPlaneFrame.rowCentredAtOrBelow(top, firstCentre, inverseCellHeight, centres, rows, tolerance);
+            int end = FaultPlaneFrame.rowCentredAtOrBelow(Math.min(base, spillDepth), firstCentre,
+                    inverseCellHeight, centres, rows, tolerance);
             LeakRuns.addRunOrNothing(differences, column[p] * (rows + 1), first, end);
         }
     }
