@@ -140,34 +140,31 @@ final class ThrowOrderedColumns {
      * cut-off depths plus unit boundaries; {@link #count()} when none.
      */
     int firstFrom(double throwValue, double boundaryMagnitude) {
-        double limit = throwValue - margin(boundaryMagnitude);
-        int low = 0;
-        int high = order.length;
-        while (low < high) {
-            int mid = (low + high) >>> 1;
-            if (scaledThrow[mid] < limit) {
-                low = mid + 1;
-            } else {
-                high = mid;
-            }
-        }
-        return low;
+        return positionsBelow(throwValue - margin(boundaryMagnitude));
     }
 
     /** The first position whose throw lies above {@code throwValue} plus the margin of {@link #firstFrom}. */
     int firstAbove(double throwValue, double boundaryMagnitude) {
-        double limit = throwValue + margin(boundaryMagnitude);
-        int low = 0;
-        int high = order.length;
-        while (low < high) {
-            int mid = (low + high) >>> 1;
-            if (scaledThrow[mid] <= limit) {
-                low = mid + 1;
-            } else {
-                high = mid;
-            }
+        // a finite throw is at or below the limit exactly when it is below the next double up
+        return positionsBelow(Math.nextUp(throwValue + margin(boundaryMagnitude)));
+    }
+
+    /**
+     * How many throws lie below {@code limit}: a binary search whose steps select instead of branch, since which half
+     * holds the answer is a coin toss the processor would mispredict half the time.
+     */
+    private int positionsBelow(double limit) {
+        int n = scaledThrow.length;
+        if (n == 0) {
+            return 0;
         }
-        return low;
+        int base = 0; // the answer lies in base .. base + n
+        while (n > 1) {
+            int half = n >>> 1;
+            base = scaledThrow[base + half - 1] < limit ? base + half : base;
+            n -= half;
+        }
+        return scaledThrow[base] < limit ? base + 1 : base;
     }
 
     /** A millionth of a millimetre per kilometre: thousands of times any rounding of a few additions. */
