@@ -83,7 +83,8 @@ final class FaultPlaneFrame {
             rowCentres[row] = zTop + (row + 0.5) * cellHeight;
         }
         firstCentre = zTop + 0.5 * cellHeight;
-        estimateTolerance = Math.abs(zTop) * inverseCellHeight + rows < MAX_ROWS_FOR_SHORTCUT ? ESTIMATE_TOLERANCE : 0.5;
+        boolean small = Math.abs(zTop) * inverseCellHeight + rows < MAX_ROWS_FOR_SHORTCUT;
+        estimateTolerance = small ? ESTIMATE_TOLERANCE : 0.5;
     }
 
     boolean compartmentOnFootwall() {

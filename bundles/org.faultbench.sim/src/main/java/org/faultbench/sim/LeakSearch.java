@@ -210,7 +210,7 @@ final class LeakSearch {
                     to = columns.blockEnd(from, end);
                     if (blockStartsTooDeep(columns, s, i, j, from)) {
                         continue; // as scanPair would pass over each window: the depth of interest only rises
-                    } else if (attic || leakRuns == null) {
+                    } else if (attic || leakRuns == null || Double.isNaN(boundaryMagnitude)) {
                         scanPair(frame, columns, s, i, j, from, to);
                     } else {
                         markPairBlock(frame, columns, s, i, j, from, to);
@@ -256,7 +256,10 @@ final class LeakSearch {
      * nothing here either: an empty window, or one that starts below the depth of interest, which with a leak map lies
      * at or below the spill depth, has an empty run of cells, and only the other windows are compared with the leak
      * point, with the tie rule of {@link #pairWindow}. The pair's numbers are kept in locals; the leak depth and the
-     * depth of interest change only with the leak point.
+     * depth of interest change only with the leak point. Tops and bases are taken by comparisons rather than
+     * Math.max and Math.min, which also order signed zeros and pass NaN on: cut-offs are finite here and unit
+     * boundaries are numbers (the caller sees to it), so a sum is never NaN, and a zero's sign changes no comparison
+     * and no row; the one place it could show, a leak depth, takes Math.max itself.
      */
     private void markPairBlock(FaultPlaneFrame frame, ThrowOrderedColumns columns, int s, int i, int j, int from,
             int to) {
@@ -280,17 +283,23 @@ final class LeakSearch {
             double zFw = fw[p];
             double zHw = hw[p];
             // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
-            double top = Math.max(zFw + topFw, zHw + topHw);
-            double base = Math.min(zFw + baseFw, zHw + baseHw);
+            double topOnFw = zFw + topFw;
+            double topOnHw = zHw + topHw;
+            double baseOnFw = zFw + baseFw;
+            double baseOnHw = zHw + baseHw;
+            double top = topOnFw > topOnHw ? topOnFw : topOnHw;
+            double base = baseOnFw < baseOnHw ? baseOnFw : baseOnHw;
             if (top <= leakDepth && top < base && top <= interestDepth) {
                 if (top < leakDepth || locationFault[s] == frame.index && column[p] < locationColumn[s]) {
-                    lowerLeak(s, top, frame, column[p], top);
+                    double exactTop = Math.max(topOnFw, topOnHw);
+                    lowerLeak(s, exactTop, frame, column[p], exactTop);
                     leakDepth = leak[s];
                     interestDepth = interest[s];
                 }
             }
-            int first = FaultPlaneFrame.rowCentredAtOrBelow(top, firstCentre, inverseCellHeight, centres, rows, tolerance);
-            int end = FaultPlaneFrame.rowCentredAtOrBelow(Math.min(base, spillDepth), firstCentre,
+            int first = FaultPlaneFrame.rowCentredAtOrBelow(top, firstCentre, inverseCellHeight, centres, rows,
+                    tolerance);
+            int end = FaultPlaneFrame.rowCentredAtOrBelow(base < spillDepth ? base : spillDepth, firstCentre,
                     inverseCellHeight, centres, rows, tolerance);
             LeakRuns.addRunOrNothing(differences, column[p] * (rows + 1), first, end);
         }
