@@ -39,6 +39,25 @@ final class LeakRuns {
     }
 
     /**
+     * The differences of fault {@code fault}, {@code rows + 1} per column from {@code column · (rows + 1)}, for a loop
+     * over millions of windows that adds its runs with {@link #addRunOrNothing}.
+     */
+    byte[] differences(int fault) {
+        return differences[fault];
+    }
+
+    /**
+     * {@link #addRun} on the differences of one fault without a branch: a run that is empty ({@code end <= first})
+     * adds and takes one at the same place. A byte may pass its limit in between, but wraps back: the sum stays exact.
+     *
+     * @param columnStart {@code column · (rows + 1)}
+     */
+    static void addRunOrNothing(byte[] differences, int columnStart, int first, int end) {
+        differences[columnStart + first]++;
+        differences[columnStart + Math.max(first, end)]--;
+    }
+
+    /**
      * Adds this block's differences to running totals laid out the same way ({@link #newTotals}); summing the
      * differences of blocks and integrating once gives the same counts as integrating each block.
      */

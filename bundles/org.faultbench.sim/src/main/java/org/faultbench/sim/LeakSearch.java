@@ -212,20 +212,102 @@ final class LeakSearch {
                 // the units overlap where b[i] - b[j + 1] < throw < b[i + 1] - b[j], up to rounding
                 int first = columns.firstFrom(b[i] - b[j + 1], boundaryMagnitude);
                 int end = columns.firstAbove(b[i + 1] - b[j], boundaryMagnitude);
-                for (int p = first; p < end; p++) {
-                    double zFw = columns.footwall(p);
-                    double zHw = columns.hangingWall(p);
-                    // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
-                    double top = Math.max(zFw + b[i], zHw + b[j]);
-                    if (top > interest[s]) {
-                        continue; // a top at the depth of interest may still tie with the leak point in a lower column
-                    }
-                    double base = Math.min(zFw + b[i + 1], zHw + b[j + 1]);
-                    if (top < base) {
-                        pairWindow(frame, columns.column(p), s, top, base);
+                for (int from = first, to; from < end; from = to) {
+                    to = columns.blockEnd(from, end);
+                    if (blockStartsTooDeep(columns, s, i, j, from)) {
+                        continue; // as scanPair would pass over each window: the depth of interest only rises
+                    } else if (attic || leakRuns == null || Double.isNaN(boundaryMagnitude)) {
+                        scanPair(frame, columns, s, i, j, from, to);
+                    } else {
+                        markPairBlock(frame, columns, s, i, j, from, to);
                     }
                 }
             }
+        }
+    }
+
+    /** Visits the windows of unit pair (i, j) at positions first .. end - 1, as {@link #scanFault} would. */
+    private void scanPair(FaultPlaneFrame frame, ThrowOrderedColumns columns, int s, int i, int j, int first,
+            int end) {
+        double[] b = boundaries;
+        for (int p = first; p < end; p++) {
+            double zFw = columns.footwall(p);
+            double zHw = columns.hangingWall(p);
+            // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
+            double top = Math.max(zFw + b[i], zHw + b[j]);
+            if (top > interest[s]) {
+                continue; // a top at the depth of interest may still tie with the leak point in a lower column
+            }
+            double base = Math.min(zFw + b[i + 1], zHw + b[j + 1]);
+            if (top < base) {
+                pairWindow(frame, columns.column(p), s, top, base);
+            }
+        }
+    }
+
+    /**
+     * Whether every window of unit pair (i, j) in the block of positions from {@code from} starts below the unit's
+     * depth of interest: then {@link #scanPair} would pass over each of them.
+     */
+    private boolean blockStartsTooDeep(ThrowOrderedColumns columns, int s, int i, int j, int from) {
+        double shallowest = columns.blockShallowestFootwall(from / ThrowOrderedColumns.BLOCK);
+        double[] b = boundaries;
+        // the expressions of the window top, with the block's shallowest footwall and least throw
+        return Math.max(shallowest + b[i], (shallowest + columns.scaledThrows()[from]) + b[j]) > interest[s];
+    }
+
+    /**
+     * {@link #scanPair} outside the attic fault with a leak map, where nearly all the time goes: one run per position,
+     * without a branch on what varies from one position to the next. The windows {@link #scanPair} passes over change
+     * nothing here either: an empty window, or one that starts below the depth of interest, which with a leak map lies
+     * at or below the spill depth, has an empty run of cells, and only the other windows are compared with the leak
+     * point, with the tie rule of {@link #pairWindow}. The pair's numbers are kept in locals; the leak depth and the
+     * depth of interest change only with the leak point. Tops and bases are taken by comparisons rather than
+     * Math.max and Math.min, which also order signed zeros and pass NaN on: cut-offs are finite here and unit
+     * boundaries are numbers (the caller sees to it), so a sum is never NaN, and a zero's sign changes no comparison
+     * and no row; the one place it could show, a leak depth, takes Math.max itself.
+     */
+    private void markPairBlock(FaultPlaneFrame frame, ThrowOrderedColumns columns, int s, int i, int j, int from,
+            int to) {
+        double[] fw = columns.footwalls();
+        double[] hw = columns.hangingWalls();
+        int[] column = columns.columnsInOrder();
+        double topFw = boundaries[i];
+        double topHw = boundaries[j];
+        double baseFw = boundaries[i + 1];
+        double baseHw = boundaries[j + 1];
+        double spillDepth = spill[s];
+        double leakDepth = leak[s];
+        double interestDepth = interest[s];
+        double firstCentre = frame.firstCentre();
+        double inverseCellHeight = frame.inverseCellHeight();
+        double[] centres = frame.rowCentres();
+        int rows = frame.rows;
+        double tolerance = frame.estimateTolerance();
+        byte[] differences = leakRuns.differences(frame.index);
+        for (int p = from; p < to; p++) {
+            double zFw = fw[p];
+            double zHw = hw[p];
+            // the expressions of HungColumns.juxtaposeReservoirs, so that tops and bases are the same doubles
+            double topOnFw = zFw + topFw;
+            double topOnHw = zHw + topHw;
+            double baseOnFw = zFw + baseFw;
+            double baseOnHw = zHw + baseHw;
+            double top = topOnFw > topOnHw ? topOnFw : topOnHw;
+            double base = baseOnFw < baseOnHw ? baseOnFw : baseOnHw;
+            if (top <= leakDepth && top < base && top <= interestDepth) {
+                if (top < leakDepth || locationFault[s] == frame.index && column[p] < locationColumn[s]) {
+                    double exactTop = Math.max(topOnFw, topOnHw);
+                    lowerLeak(s, exactTop, frame, column[p], exactTop);
+                    leakDepth = leak[s];
+                    interestDepth = interest[s];
+                }
+            }
+            int first = FaultPlaneFrame.rowCentredAtOrBelow(top, firstCentre, inverseCellHeight, centres, rows,
+                    tolerance);
+            int end = FaultPlaneFrame.rowCentredAtOrBelow(base < spillDepth ? base : spillDepth, firstCentre,
+                    inverseCellHeight, centres, rows, tolerance);
+            LeakRuns.addRunOrNothing(differences, column[p] * (rows + 1), first, end);
         }
     }
 

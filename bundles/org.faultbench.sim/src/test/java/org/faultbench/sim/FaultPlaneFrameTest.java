@@ -42,4 +42,29 @@ class FaultPlaneFrameTest {
             }
         }
     }
+
+    /**
+     * The shortcut that trusts an estimate clear of a whole row agrees with the estimate checked against the centres
+     * (tolerance 0.5 turns the shortcut off), right at the edge of its tolerance: depths a few millionths of a row
+     * from a centre, where it is first trusted.
+     */
+    @Test
+    void theShortcutAgreesWithTheCheckedEstimateAtTheEdgeOfItsTolerance() {
+        for (double cellHeight : new double[] { 5, 0.7, 3.3 }) {
+            FaultPlaneFrame frame = frame(cellHeight);
+            SplittableRandom random = new SplittableRandom(7);
+            for (int i = 0; i < 50_000; i++) {
+                double offsetInRows = random.nextDouble(-3e-6, 3e-6);
+                double z = frame.rowCentre(random.nextInt(frame.rows)) + offsetInRows * cellHeight;
+                int checked = FaultPlaneFrame.rowCentredAtOrBelow(z, frame.firstCentre(), frame.inverseCellHeight(),
+                        frame.rowCentres(), frame.rows, 0.5);
+                assertEquals(checked, frame.firstRowCentredAtOrBelow(z), "z " + z + ", cell height " + cellHeight);
+                int expected = 0;
+                while (expected < frame.rows && frame.rowCentre(expected) < z) {
+                    expected++;
+                }
+                assertEquals(expected, checked, "z " + z + ", cell height " + cellHeight);
+            }
+        }
+    }
 }

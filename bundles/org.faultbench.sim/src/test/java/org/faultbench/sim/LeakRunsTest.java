@@ -1,6 +1,7 @@
 package org.faultbench.sim;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -66,5 +67,30 @@ class LeakRunsTest {
         expected[(frame.rows - 2) * frame.columns + frame.columns - 1] = 1;
         expected[(frame.rows - 1) * frame.columns + frame.columns - 1] = 1;
         assertArrayEquals(expected, runs.counts(frame));
+    }
+
+    /**
+     * The branch-free form adds what addRun adds, and nothing for an empty or reversed run, even on a difference that
+     * a full block has taken to the limit of a byte (it wraps past the limit and back).
+     */
+    @Test
+    void aRunWithoutABranchAddsTheSameAndNothingWhenEmpty() {
+        List<FaultPlaneFrame> frames = frames();
+        FaultPlaneFrame frame = frames.get(0);
+        int column = 3;
+        LeakRuns plain = new LeakRuns(frames);
+        LeakRuns branchFree = new LeakRuns(frames);
+        byte[] differences = branchFree.differences(0);
+        int columnStart = column * (frame.rows + 1);
+        for (int realisation = 0; realisation < LeakRuns.MAX_REALISATIONS; realisation++) {
+            plain.addRun(0, column, 2, 5);
+            LeakRuns.addRunOrNothing(differences, columnStart, 2, 5);
+            LeakRuns.addRunOrNothing(differences, columnStart, 2, 2); // empty, on the difference at its limit
+            LeakRuns.addRunOrNothing(differences, columnStart, 5, 1); // reversed: nothing
+        }
+        long[] counts = branchFree.counts(frame);
+        assertArrayEquals(plain.counts(frame), counts);
+        assertEquals(LeakRuns.MAX_REALISATIONS, counts[2 * frame.columns + column], "row 2 leaks in every realisation");
+        assertEquals(0, counts[5 * frame.columns + column], "row 5 is past the run");
     }
 }
