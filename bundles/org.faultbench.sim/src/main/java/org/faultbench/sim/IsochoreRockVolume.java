@@ -27,10 +27,13 @@ final class IsochoreRockVolume {
         this.shift = shift;
     }
 
-    /** Gross rock volume (m³) of {@code unit} above {@code contact}, with the reference horizon the top of {@code ref}. */
-    double grossRockVolume(ColumnDraw columns, int unit, int ref, double contact) {
+    /**
+     * Gross rock volume (m³) of {@code unit} above each of {@code contacts}, with the reference horizon the top of
+     * {@code ref}: one pass over the nodes, each volume summed in node order as if computed alone.
+     */
+    double[] grossRockVolumes(ColumnDraw columns, int unit, int ref, double... contacts) {
         GridGeometry g = referenceTop.geometry();
-        double sum = 0;
+        double[] sums = new double[contacts.length];
         for (int k = 0; k < g.size(); k++) {
             if (!trapped.contains(k) || referenceTop.isNull(k)) {
                 continue;
@@ -38,9 +41,15 @@ final class IsochoreRockVolume {
             double[] thickness = columns.thicknessesAt(g.x(g.column(k)), g.y(g.row(k)));
             double top = referenceTop.value(k) + shift + depthBelowReference(thickness, unit, ref);
             double base = top + thickness[unit];
-            sum += Math.max(0, Math.min(contact, base) - top);
+            for (int c = 0; c < contacts.length; c++) {
+                sums[c] += Math.max(0, Math.min(contacts[c], base) - top);
+            }
         }
-        return sum * referenceTop.cellArea();
+        double[] volumes = new double[contacts.length];
+        for (int c = 0; c < contacts.length; c++) {
+            volumes[c] = sums[c] * referenceTop.cellArea();
+        }
+        return volumes;
     }
 
     /** Depth of the top of {@code unit} below the top of {@code ref} (negative above it). */

@@ -87,18 +87,22 @@ final class RealisationEvaluator {
             double offset = trap.offsetOf(column, unit, ref);
             double thickness = column.unit(unit).thickness();
             var properties = in.reservoirProperties().get(unit);
-            if (Double.isFinite(contact)) {
-                out.set(s, UnitQuantity.STOIIP, properties.stockTankOil(isochores
-                        ? trap.nodeVolume().grossRockVolume(in.columns(), unit, ref, contact)
-                        : trap.areaDepth.grossRockVolume(offset, contact, thickness)));
+            if (!Double.isFinite(contact)) {
+                continue;
             }
-            if (atticFault >= 0 && Double.isFinite(contact)) {
-                double after = AtticAnalysis.contactAfterDepletion(contact, connection[s], in.drainageDepth());
+            boolean attic = atticFault >= 0;
+            double after = attic ? AtticAnalysis.contactAfterDepletion(contact, connection[s], in.drainageDepth())
+                    : Double.NaN;
+            // with isochores one pass over the nodes gives both volumes: each node's top and base are found once
+            double[] volumes = isochores ? trap.nodeVolume().grossRockVolumes(in.columns(), unit, ref,
+                    attic ? new double[] { contact, after } : new double[] { contact }) : null;
+            out.set(s, UnitQuantity.STOIIP, properties.stockTankOil(isochores ? volumes[0]
+                    : trap.areaDepth.grossRockVolume(offset, contact, thickness)));
+            if (attic) {
                 out.set(s, UnitQuantity.CONNECTION_DEPTH, connection[s]);
                 out.set(s, UnitQuantity.ATTIC_CONTACT, after);
                 out.set(s, UnitQuantity.ATTIC_COLUMN, Math.max(0, after - crest));
-                out.set(s, UnitQuantity.ATTIC_STOIIP, properties.stockTankOil(isochores
-                        ? trap.nodeVolume().grossRockVolume(in.columns(), unit, ref, after)
+                out.set(s, UnitQuantity.ATTIC_STOIIP, properties.stockTankOil(isochores ? volumes[1]
                         : trap.areaDepth.grossRockVolume(offset, after, thickness)));
             }
         }
