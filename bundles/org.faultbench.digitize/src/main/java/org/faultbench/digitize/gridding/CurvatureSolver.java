@@ -10,9 +10,12 @@ package org.faultbench.digitize.gridding;
  * cycle treats poorly.
  * <p>
  * Stopping rule: each equation is scaled to a unit weight on its own node, so its residual is the change in metres
- * that a Jacobi sweep would make at that node; the solve stops when the root mean square of these over all nodes
- * is at most {@value #RMS_FRACTION} of the tolerance. That is stricter than "no node changes by more than the
- * tolerance in a sweep", which can stop over-relaxation far from the solution when it converges slowly.
+ * that one Jacobi sweep would make there; the caller bounds the root mean square of these residuals. The equations
+ * are ill-conditioned where data are sparse (grid edges, fault blocks with few points): a small residual can hide a
+ * larger error there, so the finest grid uses a bound far below the tolerance ({@link MinimumCurvatureGridder}).
+ * Measured: on the test patch of CurvatureSolverTest, an RMS residual of 1e-7 m agrees with over-relaxation run to
+ * 1e-11 m per sweep within 0.1 mm; on the benchmark dome at 250 &times; 250 nodes, an RMS residual of 1e-6 m left
+ * up to 6 cm near an edge, and over-relaxation stopped at 0.1 mm per sweep up to 4 m.
  */
 final class CurvatureSolver {
     private static final int RESTART = 30;

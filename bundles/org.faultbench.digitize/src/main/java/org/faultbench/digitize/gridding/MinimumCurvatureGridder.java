@@ -26,7 +26,7 @@ import org.faultbench.digitize.io.XyzPoint;
 public final class MinimumCurvatureGridder implements SurfaceGridder {
     private static final int COARSEST_INTERVALS = 8;
     /** Root-mean-square equation residual on the finest grid at which the solve stops, as a fraction of the tolerance. */
-    static final double FINE_RMS_FRACTION = 0.01;
+    static final double FINE_RMS_FRACTION = 0.001;
 
     private final MinimumCurvatureSettings settings;
 

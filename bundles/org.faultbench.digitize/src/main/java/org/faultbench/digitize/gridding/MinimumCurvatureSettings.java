@@ -7,7 +7,7 @@ package org.faultbench.digitize.gridding;
  *        membrane and overshoots less between sparse data (Smith &amp; Wessel 1990, Geophysics 55, 293&ndash;305;
  *        from memory); in [0, 1)
  * @param tolerance metres, &gt; 0: the solve of the finest grid stops when the root mean square of the equation
- *        residuals (each the change in metres that one Jacobi sweep would make at its node) is at most 1/100 of this,
+ *        residuals (each the change in metres that one Jacobi sweep would make at its node) is at most 1/1000 of this,
  *        coarser grids at this times their spacing multiple ({@link MinimumCurvatureGridder})
  * @param maxIterations cap on Krylov iterations (one multigrid cycle each) per grid level, &ge; 1
  * @param overRelaxation factor of the successive over-relaxation sweeps, in (0, 2); 1.4 is customary (common
