@@ -33,6 +33,8 @@ final class GridMatrix {
     private final byte[] kind;
     private final int[] sharedOffsets;
     private final double[] sharedWeights;
+    /** Weights of a shared symmetric 13-point stencil (along x at 1 and 2, along y at 1 and 2, diagonal), or null. */
+    private final double[] thirteenPoint;
     private final int[] start;
     private final int[] column;
     private final double[] value;
@@ -53,6 +55,7 @@ final class GridMatrix {
         start = new int[n + 1];
         sharedOffsets = offDiagonalOffsets(sharedWindow, nx);
         sharedWeights = offDiagonalWeights(sharedWindow);
+        thirteenPoint = thirteenPointWeights(sharedWindow);
         int[] columns = new int[Math.max(16, n)];
         double[] values = new double[columns.length];
         double[] window = new double[WINDOW];
@@ -100,6 +103,32 @@ final class GridMatrix {
         }
         return java.util.stream.IntStream.range(0, WINDOW).filter(s -> s != CENTRE && window[s] != 0)
                 .map(s -> offset(s, nx)).toArray();
+    }
+
+    /** The five weights of {@code window} when it is a symmetric 13-point stencil, so that it can be unrolled. */
+    private static double[] thirteenPointWeights(double[] window) {
+        if (window == null) {
+            return null;
+        }
+        double[] w = { window[slot(1, 0)], window[slot(2, 0)], window[slot(0, 1)], window[slot(0, 2)],
+            window[slot(1, 1)] };
+        double[] expected = new double[WINDOW];
+        for (int d = -2; d <= 2; d += 4) {
+            expected[slot(d, 0)] = w[1];
+            expected[slot(0, d)] = w[3];
+        }
+        for (int d = -1; d <= 1; d += 2) {
+            expected[slot(d, 0)] = w[0];
+            expected[slot(0, d)] = w[2];
+            expected[slot(d, -1)] = w[4];
+            expected[slot(d, 1)] = w[4];
+        }
+        expected[CENTRE] = window[CENTRE];
+        return Arrays.equals(expected, window) ? w : null;
+    }
+
+    private static int slot(int di, int dj) {
+        return (dj + 2) * SPAN + di + 2;
     }
 
     private static double[] offDiagonalWeights(double[] window) {
@@ -171,7 +200,13 @@ final class GridMatrix {
     /** The off-diagonal part of row {@code k} times {@code x}. */
     private double offDiagonalProduct(int k, double[] x) {
         double sum = 0;
-        if (kind[k] == SHARED) {
+        if (kind[k] == SHARED && thirteenPoint != null) {
+            double[] w = thirteenPoint;
+            int up = k + nx;
+            int down = k - nx;
+            sum = w[0] * (x[k - 1] + x[k + 1]) + w[1] * (x[k - 2] + x[k + 2]) + w[2] * (x[down] + x[up])
+                    + w[3] * (x[down - nx] + x[up + nx]) + w[4] * (x[down - 1] + x[down + 1] + x[up - 1] + x[up + 1]);
+        } else if (kind[k] == SHARED) {
             for (int e = 0; e < sharedOffsets.length; e++) {
                 sum += sharedWeights[e] * x[k + sharedOffsets[e]];
             }
