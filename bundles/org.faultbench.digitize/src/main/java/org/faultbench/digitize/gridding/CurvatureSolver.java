@@ -7,7 +7,9 @@ package org.faultbench.digitize.gridding;
  * Why not the over-relaxation sweeps alone: they need thousands of sweeps on a 1000 &times; 1000 grid, because
  * long-wavelength error, above all along fault traces and edges far from data, decays by a tiny fraction per sweep.
  * The V-cycle removes it at every wavelength, and GMRES mops up the few modes (fault blocks, edges) that the
- * cycle treats poorly.
+ * cycle treats poorly. The cycle works on the equations multiplied back by their normal-equation weights
+ * ({@link CurvatureLevel#equationScale}), whose curvature rows are symmetric: with the rows as the sweeps see them
+ * (unit centre weight) the Galerkin coarse operators had rows on which Gauss&ndash;Seidel diverged.
  * <p>
  * Stopping rule: each equation is scaled to a unit weight on its own node, so its residual is the change in metres
  * that one Jacobi sweep would make there; the caller bounds the root mean square of these residuals. The equations

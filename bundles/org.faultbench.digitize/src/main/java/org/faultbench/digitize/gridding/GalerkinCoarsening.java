@@ -115,7 +115,8 @@ final class GalerkinCoarsening {
                     double a = pf * s.entries[e];
                     int colI = col % fnx;
                     int colJ = col / fnx;
-                    for (int m = 4 * col; m < 4 * col + 4 && parent[m] >= 0; m++) {
+                    int first = Prolongation.MAX_PARENTS * col;
+                    for (int m = first; m < first + Prolongation.MAX_PARENTS && parent[m] >= 0; m++) {
                         int di = 2 * (parent[m] % cnx - ci);
                         int dj = 2 * (parent[m] / cnx - cj);
                         int si = (di >> 1) + 2;

@@ -20,12 +20,12 @@ import org.faultbench.digitize.io.XyzPoint;
  * {@value #FINE_RMS_FRACTION} of the tolerance, or at the iteration cap.
  * <p>
  * Null nodes: inside fault polygons, in fault blocks that hold no data, and isolated nodes (all four links closed).
- * A fault block with fewer than three data points not on a line has no unique minimum-curvature surface; its tilt
- * then comes from the coarser level.
+ * A fault block with fewer than three data points not on a line has no unique minimum-curvature surface; the solve
+ * then starts from the coarser level's tilt and keeps whichever solution it reaches from there.
  */
 public final class MinimumCurvatureGridder implements SurfaceGridder {
     private static final int COARSEST_INTERVALS = 8;
-    /** Root-mean-square equation residual on the finest grid at which the solve stops, as a fraction of the tolerance. */
+    /** RMS equation residual on the finest grid at which the solve stops, as a fraction of the tolerance. */
     static final double FINE_RMS_FRACTION = 0.001;
 
     private final MinimumCurvatureSettings settings;

@@ -58,16 +58,6 @@ final class MultigridCycle {
         return unknown;
     }
 
-    /** The operator of level {@code l}, 0 the finest. */
-    GridMatrix matrix(int l) {
-        return matrices.get(l);
-    }
-
-    /** Number of grids in the hierarchy, the finest included. */
-    int levels() {
-        return matrices.size();
-    }
-
     /** e = M r: one V-cycle on A e = r from e = 0. */
     void apply(double[] r, double[] e) {
         cycle(0, r, e);

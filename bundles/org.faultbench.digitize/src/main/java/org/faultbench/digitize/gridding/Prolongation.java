@@ -13,7 +13,8 @@ import java.util.Arrays;
  * its 3 &times; 3 neighbourhood, or no parent at all; the smoother alone then corrects it.
  */
 final class Prolongation {
-    private static final int MAX_PARENTS = 4;
+    /** Parent slots per fine node. */
+    static final int MAX_PARENTS = 4;
 
     private final int fineNx;
     private final int coarseNx;

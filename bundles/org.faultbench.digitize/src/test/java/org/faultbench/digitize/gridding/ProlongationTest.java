@@ -63,7 +63,8 @@ class ProlongationTest {
                 double py = grid.y(2 * (PARENTS[m] / p.coarseNx()));
                 // south of y = 650 m (two cells short of the tip) the trace separates its two sides completely
                 if (y <= 650 && py <= 650) {
-                    assertEquals(sideOfTrace(x, y), sideOfTrace(px, py), "node " + k + " takes a parent across the fault");
+                    assertEquals(sideOfTrace(x, y), sideOfTrace(px, py),
+                            "node " + k + " takes a parent across the fault");
                 }
                 weightSum += WEIGHTS[m];
             }
