@@ -1,9 +1,13 @@
 package org.faultbench.digitize.gridding;
 
+import java.util.Arrays;
+
 import org.faultbench.core.grid.GridGeometry;
 
 /**
- * The minimum-curvature equations on one grid and their solution by successive over-relaxation.
+ * The minimum-curvature equations on one grid, as rows of a linear system ({@link #window}, {@link
+ * #rightHandSide}) for {@link CurvatureSolver}, and their solution by successive over-relaxation ({@link #solve}),
+ * kept as the reference the faster solver is checked against.
  * <p>
  * Curvature: the surface minimises the sum of squared second differences (z<sub>xx</sub>&sup2;,
  * 2&middot;z<sub>xy</sub>&sup2;, z<sub>yy</sub>&sup2;: the discrete total curvature of Briggs 1974, Geophysics 39,
@@ -35,10 +39,13 @@ final class CurvatureLevel {
     private final NodeData data;
     private final byte[] kind;
     private final int[][] rowOffsets;
+    private final byte[][] rowSlots;
     private final double[][] rowWeights;
     private final double curvature;
     private final double ratio;
     private final double tension;
+    /** Centre weight of each irregular node's normal-equation row before it was divided out. */
+    private final double[] irregularCentre;
 
     /**
      * @param tension T in [0, 1)
@@ -53,7 +60,9 @@ final class CurvatureLevel {
         this.ratio = spacingRatio * spacingRatio;
         int n = g.size();
         kind = new byte[n];
+        irregularCentre = new double[n];
         rowOffsets = new int[n][];
+        rowSlots = new byte[n][];
         rowWeights = new double[n][];
         boolean[] reached = links.reachableFrom(data.flags());
         for (int k = 0; k < n; k++) {
@@ -74,6 +83,7 @@ final class CurvatureLevel {
             double[] row = normalEquationRow(i, j);
             kind[k] = row[CENTRE] > 0 ? IRREGULAR : NULL_NODE;
             if (kind[k] == IRREGULAR) {
+                irregularCentre[k] = row[CENTRE];
                 compress(k, row);
             }
         }
@@ -149,14 +159,95 @@ final class CurvatureLevel {
             }
         }
         rowOffsets[k] = new int[count];
+        rowSlots[k] = new byte[count];
         rowWeights[k] = new double[count];
         int m = 0;
         for (int s = 0; s < row.length; s++) {
             if (s != CENTRE && row[s] != 0) {
                 rowOffsets[k][m] = (s / SPAN - 2) * g.nx() + (s % SPAN - 2);
+                rowSlots[k][m] = (byte) s;
                 rowWeights[k][m] = row[s] / row[CENTRE];
                 m++;
             }
+        }
+    }
+
+    GridGeometry geometry() {
+        return g;
+    }
+
+    NodeLinks links() {
+        return links;
+    }
+
+    /** Whether node {@code k} carries an equation and a value (is not null). */
+    boolean isUnknown(int k) {
+        return kind[k] != NULL_NODE;
+    }
+
+    /** Whether node {@code k} obeys the fixed 13-point stencil away from faults, edges and data. */
+    boolean isRegular(int k) {
+        return kind[k] == REGULAR;
+    }
+
+    /**
+     * The equation of node {@code k} written as &Sigma; w<sub>s</sub> z<sub>s</sub> = {@link #rightHandSide}, with the
+     * weights on its 5 &times; 5 neighbourhood put into {@code window} (slot (dj + 2) &middot; 5 + di + 2, centre
+     * weight 1, all slots overwritten). These are exactly the equations whose fixed point {@link #solve} iterates to.
+     */
+    void window(int k, double[] window) {
+        Arrays.fill(window, 0);
+        switch (kind[k]) {
+            case REGULAR -> Stencil.of(curvature, ratio, tension).fill(window);
+            case IRREGULAR -> {
+                for (int m = 0; m < rowSlots[k].length; m++) {
+                    window[rowSlots[k][m]] = rowWeights[k][m];
+                }
+            }
+            case DATUM -> datumWindow(k, window);
+            default -> {
+                return;
+            }
+        }
+        window[CENTRE] = 1;
+    }
+
+    /**
+     * The factor that turns the equation of node {@code k} back into its normal-equation form: the centre weight of
+     * the curvature row, so that curvature rows times their factor form a symmetric matrix (the Hessian of the
+     * total curvature); data equations get the factor of a regular row, which weighs a data node like a regular one.
+     */
+    double equationScale(int k) {
+        return kind[k] == IRREGULAR ? irregularCentre[k] : Stencil.centre(curvature, ratio, tension);
+    }
+
+    /** Right-hand side of the equation of node {@code k}: the data depth on a data node, else 0, metres. */
+    double rightHandSide(int k) {
+        return kind[k] == DATUM ? data.z(k) : 0;
+    }
+
+    /** z0 + &xi;z_x + &eta;z_y = z_p with the slopes of {@link #datum} written out as neighbour weights. */
+    private void datumWindow(int k, double[] window) {
+        int i = g.column(k);
+        int j = g.row(k);
+        slopeWeights(window, data.xi(k), 1, 0, links.east(i, j), links.east(i - 1, j), links.east(i + 1, j),
+                links.east(i - 2, j));
+        slopeWeights(window, data.eta(k), 0, 1, links.north(i, j), links.north(i, j - 1), links.north(i, j + 1),
+                links.north(i, j - 2));
+    }
+
+    /** Adds {@code factor} times the slope of {@link #slope} along (di, dj) to {@code window}. */
+    private static void slopeWeights(double[] window, double factor, int di, int dj, boolean plus, boolean minus,
+            boolean plusPlus, boolean minusMinus) {
+        if (plus && minus) {
+            window[slot(di, dj)] += factor / 2;
+            window[slot(-di, -dj)] -= factor / 2;
+        } else if (plus && plusPlus) {
+            window[slot(2 * di, 2 * dj)] += factor;
+            window[slot(di, dj)] -= factor;
+        } else if (minus && minusMinus) {
+            window[slot(-di, -dj)] += factor;
+            window[slot(-2 * di, -2 * dj)] -= factor;
         }
     }
 
@@ -258,11 +349,32 @@ final class CurvatureLevel {
     /** The fixed 13-point stencil away from faults and edges, weights divided by the centre weight. */
     private record Stencil(double x1, double x2, double y1, double y2, double diagonal) {
 
+        static double centre(double curvature, double r, double tension) {
+            return curvature * (6 + 6 * r * r + 8 * r) + tension * (2 + 2 * r);
+        }
+
         static Stencil of(double curvature, double r, double tension) {
-            double centre = curvature * (6 + 6 * r * r + 8 * r) + tension * (2 + 2 * r);
+            double centre = centre(curvature, r, tension);
             return new Stencil((curvature * (-4 - 4 * r) - tension) / centre, curvature / centre,
                     (curvature * (-4 * r * r - 4 * r) - tension * r) / centre, curvature * r * r / centre,
                     curvature * 2 * r / centre);
+        }
+
+        /** Writes the weights into a 5 x 5 window (slot (dj + 2) * 5 + di + 2); the centre slot is left alone. */
+        void fill(double[] window) {
+            window[slot(-1, 0)] = x1;
+            window[slot(1, 0)] = x1;
+            window[slot(-2, 0)] = x2;
+            window[slot(2, 0)] = x2;
+            window[slot(0, -1)] = y1;
+            window[slot(0, 1)] = y1;
+            window[slot(0, -2)] = y2;
+            window[slot(0, 2)] = y2;
+            for (int dj = -1; dj <= 1; dj += 2) {
+                for (int di = -1; di <= 1; di += 2) {
+                    window[slot(di, dj)] = diagonal;
+                }
+            }
         }
 
         double apply(double[] z, int k, int nx) {

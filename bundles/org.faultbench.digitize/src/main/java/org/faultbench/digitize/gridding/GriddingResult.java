@@ -7,7 +7,8 @@ import org.faultbench.core.grid.RegularGrid;
  *
  * @param surface depth grid, metres; null nodes (NaN) where no value could be computed without crossing a fault
  * @param residuals misfit at every control point and contour vertex ({@link GriddingInput#digitizedPoints()})
- * @param iterations sweeps on the finest grid for iterative methods; 0 for direct ones (TIN)
+ * @param iterations iterations on the finest grid for iterative methods (minimum curvature: Krylov iterations, one
+ *        multigrid cycle each); 0 for direct ones (TIN)
  * @param converged whether the iteration met its tolerance before its cap; always true for direct methods
  */
 public record GriddingResult(RegularGrid surface, ResidualReport residuals, int iterations, boolean converged) {

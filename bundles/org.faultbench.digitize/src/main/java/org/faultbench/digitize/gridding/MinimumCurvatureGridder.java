@@ -11,18 +11,22 @@ import org.faultbench.digitize.io.XyzPoint;
  * 39&ndash;48), optionally with tension (Smith &amp; Wessel 1990; from memory), with faults as barriers that no
  * finite-difference stencil reaches across ({@link CurvatureLevel}).
  * <p>
- * Contours enter as data points sampled every half node spacing along them. Over-relaxation smooths short
- * wavelengths quickly but long ones slowly, so the surface is first solved on grids with 2, 4, 8... times the node
- * spacing (coarsest about {@value #COARSEST_INTERVALS} cells across) and each solution, read without crossing faults
- * ({@link SurfaceSampler}), starts the next finer one. Each level iterates until no node changes by more than the
- * tolerance times its spacing multiple (a coarse level only has to give a start), or the iteration cap is reached.
+ * Contours enter as data points sampled every half node spacing along them. The equations of each grid are solved
+ * by GMRES preconditioned with a Galerkin multigrid V-cycle ({@link CurvatureSolver}). The surface is first solved on
+ * grids with 2, 4, 8... times the node spacing (coarsest about {@value #COARSEST_INTERVALS} cells across) and each
+ * solution, read without crossing faults ({@link SurfaceSampler}), starts the next finer one: a close start saves
+ * iterations on the large grids. A coarse level only has to give a start, so it stops when the root mean square of
+ * its equation residuals is at most the tolerance times its spacing multiple; the finest grid stops at
+ * {@value #FINE_RMS_FRACTION} of the tolerance, or at the iteration cap.
  * <p>
  * Null nodes: inside fault polygons, in fault blocks that hold no data, and isolated nodes (all four links closed).
- * A fault block with fewer than three data points not on a line has no unique minimum-curvature surface; its tilt
- * then comes from the coarser level.
+ * A fault block with fewer than three data points not on a line has no unique minimum-curvature surface; the solve
+ * then starts from the coarser level's tilt and keeps whichever solution it reaches from there.
  */
 public final class MinimumCurvatureGridder implements SurfaceGridder {
     private static final int COARSEST_INTERVALS = 8;
+    /** RMS equation residual on the finest grid at which the solve stops, as a fraction of the tolerance. */
+    static final double FINE_RMS_FRACTION = 0.001;
 
     private final MinimumCurvatureSettings settings;
 
@@ -57,8 +61,8 @@ public final class MinimumCurvatureGridder implements SurfaceGridder {
             }
             CurvatureLevel equations = new CurvatureLevel(links, nodeData, settings.tension());
             double[] start = startValues(level, previous, input.barriers(), nodeData.meanZ());
-            solution = equations.solve(start, step * settings.tolerance(), settings.maxIterations(),
-                    settings.overRelaxation());
+            double rms = step == 1 ? FINE_RMS_FRACTION * settings.tolerance() : step * settings.tolerance();
+            solution = CurvatureSolver.solve(equations, start, rms, settings.maxIterations());
             previous = new RegularGrid(level, solution.values());
         }
         ResidualReport residuals = ResidualReport.of(previous, input.barriers(), input.digitizedPoints());
