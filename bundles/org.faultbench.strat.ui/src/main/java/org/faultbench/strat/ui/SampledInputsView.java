@@ -3,16 +3,15 @@ package org.faultbench.strat.ui;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
 
 import org.eclipse.core.commands.operations.IUndoContext;
 import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.CellEditor;
 import org.eclipse.jface.viewers.CheckboxCellEditor;
-import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.EditingSupport;
 import org.eclipse.jface.viewers.ICellEditorListener;
 import org.eclipse.jface.viewers.TableViewer;
-import org.eclipse.jface.viewers.TableViewerColumn;
 import org.eclipse.jface.viewers.TextCellEditor;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.GridData;
@@ -85,23 +84,9 @@ public class SampledInputsView extends ViewPart {
         refresh();
     }
 
-    private interface Text {
-        String of(InputRow row);
-    }
-
-    private void column(String title, int width, Text text, EditingSupport editing) {
-        TableViewerColumn c = new TableViewerColumn(table, SWT.LEFT);
-        c.getColumn().setText(title);
-        c.getColumn().setWidth(width);
-        c.setLabelProvider(new ColumnLabelProvider() {
-            @Override
-            public String getText(Object element) {
-                return text.of((InputRow) element);
-            }
-        });
-        if (editing != null) {
-            c.setEditingSupport(editing);
-        }
+    private void column(String title, int width, Function<InputRow, String> text,
+            EditingSupport editing) {
+        TableColumns.add(table, InputRow.class, title, width, text, editing);
     }
 
     /** Ticking includes the input with the plug-in's distribution; unticking leaves it out. */

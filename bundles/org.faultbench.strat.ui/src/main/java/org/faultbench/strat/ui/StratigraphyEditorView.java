@@ -3,18 +3,17 @@ package org.faultbench.strat.ui;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Function;
 
 import org.eclipse.core.commands.operations.IUndoContext;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.jface.viewers.ArrayContentProvider;
-import org.eclipse.jface.viewers.ColumnLabelProvider;
 import org.eclipse.jface.viewers.ColumnViewerEditor;
 import org.eclipse.jface.viewers.ColumnViewerEditorActivationStrategy;
 import org.eclipse.jface.viewers.ComboBoxViewerCellEditor;
 import org.eclipse.jface.viewers.EditingSupport;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.TableViewer;
-import org.eclipse.jface.viewers.TableViewerColumn;
 import org.eclipse.jface.viewers.TableViewerEditor;
 import org.eclipse.jface.viewers.CellEditor;
 import org.eclipse.jface.viewers.LabelProvider;
@@ -103,23 +102,9 @@ public class StratigraphyEditorView extends ViewPart implements ISaveablePart {
         });
     }
 
-    private interface Text {
-        String of(UnitRow row);
-    }
-
-    private void column(String title, int width, Text text, EditingSupport editing) {
-        TableViewerColumn c = new TableViewerColumn(table, SWT.LEFT);
-        c.getColumn().setText(title);
-        c.getColumn().setWidth(width);
-        c.setLabelProvider(new ColumnLabelProvider() {
-            @Override
-            public String getText(Object element) {
-                return text.of((UnitRow) element);
-            }
-        });
-        if (editing != null) {
-            c.setEditingSupport(editing);
-        }
+    private void column(String title, int width, Function<UnitRow, String> text,
+            EditingSupport editing) {
+        TableColumns.add(table, UnitRow.class, title, width, text, editing);
     }
 
     /** Lithology is chosen from the classes the model knows. */
