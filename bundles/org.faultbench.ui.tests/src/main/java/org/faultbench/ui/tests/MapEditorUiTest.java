@@ -130,6 +130,16 @@ class MapEditorUiTest {
 
         editor.commandStack().undo();
         assertEquals(0, topologyMarkers().length, "undoing the second contour clears the problem");
+
+        // the problem back, then the map closed before its check has run: closing stops the check and clears the
+        // sheet's markers
+        editor.commandStack().redo();
+        assertEquals(2, sheet.features().size());
+        Job pending = editor.topologyCheck();
+        page.closeEditor(editor, false);
+        pending.join(10_000, null);
+        assertEquals(0, ResourcesPlugin.getWorkspace().getRoot().findMarkers(MapSheetEditor.topologyMarkerType(),
+                false, IResource.DEPTH_ZERO).length, "a closed map leaves no problems behind");
     }
 
     private IMarker[] topologyMarkers() throws Exception {

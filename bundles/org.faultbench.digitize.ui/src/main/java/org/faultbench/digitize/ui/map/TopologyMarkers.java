@@ -2,6 +2,7 @@ package org.faultbench.digitize.ui.map;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.function.BooleanSupplier;
 import java.util.stream.Collectors;
 
 import org.eclipse.core.resources.IMarker;
@@ -28,11 +29,18 @@ final class TopologyMarkers {
     private TopologyMarkers() {
     }
 
-    /** Replaces the markers of {@code sheet} (a name the user recognises, e.g. the file name) by {@code problems}. */
-    static void publish(String sheet, List<TopologyProblem> problems) throws CoreException {
+    /**
+     * Replaces the markers of {@code sheet} (a name the user recognises, e.g. the file name) by {@code problems}, or
+     * only removes them when {@code wanted} says no at the moment of writing: marker changes run one at a time, so a
+     * check that finishes after its editor closed cannot leave markers behind.
+     */
+    static void publish(String sheet, List<TopologyProblem> problems, BooleanSupplier wanted) throws CoreException {
         IWorkspaceRoot root = ResourcesPlugin.getWorkspace().getRoot();
         ResourcesPlugin.getWorkspace().run(monitor -> {
             remove(root, sheet);
+            if (!wanted.getAsBoolean()) {
+                return;
+            }
             for (TopologyProblem p : problems) {
                 IMarker marker = root.createMarker(TYPE);
                 marker.setAttribute(IMarker.MESSAGE, p.message());

@@ -33,6 +33,7 @@ final class TopologyWatch {
     private final Job job;
     private final MapSheetListener onEdit = (changed, edit) -> schedule(SETTLE_MS);
     private volatile MapSheet latest;
+    private volatile boolean watching;
 
     TopologyWatch(MapSheet sheet, String sheetName) {
         this.sheet = sheet;
@@ -43,22 +44,23 @@ final class TopologyWatch {
 
     /** Starts watching and checks the sheet as it is now; call on the thread that edits the sheet. */
     void start() {
+        watching = true;
         sheet.addListener(onEdit);
         schedule(0);
     }
 
-    /** Stops watching and removes the sheet's markers. */
+    /**
+     * Stops watching and removes the sheet's markers, without waiting for a check under way (the editor closes at
+     * once): such a check finds the watch stopped when it writes, and writes nothing.
+     */
     void stop() {
+        watching = false;
         sheet.removeListener(onEdit);
         job.cancel();
         try {
-            job.join(2000, null);
             TopologyMarkers.clear(sheetName);
-        } catch (CoreException | InterruptedException | org.eclipse.core.runtime.OperationCanceledException e) {
+        } catch (CoreException e) {
             ILog.of(TopologyWatch.class).log(Status.warning("Could not remove topology markers of " + sheetName, e));
-            if (e instanceof InterruptedException) {
-                Thread.currentThread().interrupt();
-            }
         }
     }
 
@@ -84,7 +86,7 @@ final class TopologyWatch {
             return Status.CANCEL_STATUS;
         }
         try {
-            TopologyMarkers.publish(sheetName, problems);
+            TopologyMarkers.publish(sheetName, problems, () -> watching);
             return Status.OK_STATUS;
         } catch (CoreException e) {
             return Status.warning("Could not list the topology problems of " + sheetName, e);
