@@ -10,7 +10,6 @@ import org.eclipse.jface.viewers.ArrayContentProvider;
 import org.eclipse.jface.viewers.CellEditor;
 import org.eclipse.jface.viewers.CheckboxCellEditor;
 import org.eclipse.jface.viewers.EditingSupport;
-import org.eclipse.jface.viewers.ICellEditorListener;
 import org.eclipse.jface.viewers.TableViewer;
 import org.eclipse.jface.viewers.TextCellEditor;
 import org.eclipse.swt.SWT;
@@ -124,28 +123,12 @@ public class SampledInputsView extends ViewPart {
 
     /** A typed distribution includes the input with it; an empty cell goes back to the plug-in's own. */
     private final class DistributionEditing extends EditingSupport {
-        private final TextCellEditor editor = new TextCellEditor(table.getTable());
         private InputRow editing;
+        private final TextCellEditor editor = NotationCellEditor.create(table.getTable(),
+                text -> editing == null ? null : problem(editing, text), SampledInputsView.this::showProblem);
 
         DistributionEditing() {
             super(table);
-            editor.setValidator(value -> editing == null ? null : problem(editing, value.toString()));
-            editor.addListener(new ICellEditorListener() {
-                @Override
-                public void editorValueChanged(boolean oldValidState, boolean newValidState) {
-                    showProblem(editor.getErrorMessage());
-                }
-
-                @Override
-                public void cancelEditor() {
-                    showProblem(null);
-                }
-
-                @Override
-                public void applyEditorValue() {
-                    showProblem(null);
-                }
-            });
         }
 
         @Override
@@ -180,16 +163,9 @@ public class SampledInputsView extends ViewPart {
         }
     }
 
+    /** An empty cell is valid: it means the plug-in's own distribution. */
     private static String problem(InputRow row, String text) {
-        if (text.isBlank()) {
-            return null;
-        }
-        try {
-            UncertainValueNotation.parse(text, row.input().bounds(), row.input().name());
-            return null;
-        } catch (IllegalArgumentException e) {
-            return e.getMessage();
-        }
+        return text.isBlank() ? null : NotationCellEditor.problem(text, row.input().bounds(), row.input().name());
     }
 
     private void apply(String label, InputRow row, boolean use, UncertainValue distribution) {

@@ -5,7 +5,6 @@ import java.util.function.Consumer;
 import org.eclipse.jface.viewers.CellEditor;
 import org.eclipse.jface.viewers.ColumnViewer;
 import org.eclipse.jface.viewers.EditingSupport;
-import org.eclipse.jface.viewers.ICellEditorListener;
 import org.eclipse.jface.viewers.TextCellEditor;
 import org.eclipse.swt.widgets.Composite;
 import org.faultbench.core.uncertain.UncertainValue;
@@ -32,33 +31,8 @@ final class UnitPropertyEditing extends EditingSupport {
         super(viewer);
         this.property = property;
         this.sink = sink;
-        this.editor = new TextCellEditor((Composite) viewer.getControl());
-        editor.setValidator(value -> problem(value.toString()));
-        editor.addListener(new ICellEditorListener() {
-            @Override
-            public void editorValueChanged(boolean oldValidState, boolean newValidState) {
-                feedback.accept(editor.getErrorMessage());
-            }
-
-            @Override
-            public void cancelEditor() {
-                feedback.accept(null);
-            }
-
-            @Override
-            public void applyEditorValue() {
-                feedback.accept(null);
-            }
-        });
-    }
-
-    private String problem(String text) {
-        try {
-            UncertainValueNotation.parse(text, property.bounds(), property.label());
-            return null;
-        } catch (IllegalArgumentException e) {
-            return e.getMessage();
-        }
+        this.editor = NotationCellEditor.create((Composite) viewer.getControl(),
+                text -> NotationCellEditor.problem(text, property.bounds(), property.label()), feedback);
     }
 
     @Override
