@@ -2,7 +2,6 @@ package org.faultbench.study.store;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.ByteBuffer;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -161,12 +160,8 @@ public final class AtomicFileStore {
      */
     static void replaceStreamed(Path file, StreamedContent content) throws IOException {
         Path temporary = sibling(file, TEMPORARY);
-        try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
-                StandardOpenOption.TRUNCATE_EXISTING)) {
-            OutputStream out = Channels.newOutputStream(channel);
-            content.writeTo(out);
-            out.flush();
-            channel.force(true);
+        try {
+            writeAndForce(temporary, content);
         } catch (IOException | RuntimeException failed) {
             Files.deleteIfExists(temporary);
             throw failed;
@@ -176,12 +171,16 @@ public final class AtomicFileStore {
     }
 
     private static void writeAndForce(Path target, byte[] content) throws IOException {
+        writeAndForce(target, out -> out.write(content));
+    }
+
+    /** Writes {@code target} from scratch and forces it to disk before returning. */
+    private static void writeAndForce(Path target, StreamedContent content) throws IOException {
         try (FileChannel channel = FileChannel.open(target, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
                 StandardOpenOption.TRUNCATE_EXISTING)) {
-            ByteBuffer buffer = ByteBuffer.wrap(content);
-            while (buffer.hasRemaining()) {
-                channel.write(buffer);
-            }
+            OutputStream out = Channels.newOutputStream(channel);
+            content.writeTo(out);
+            out.flush();
             channel.force(true);
         }
     }
