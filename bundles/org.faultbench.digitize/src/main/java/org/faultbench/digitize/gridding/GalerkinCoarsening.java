@@ -10,7 +10,11 @@ import java.util.stream.IntStream;
  * one seen through the interpolation, so fault barriers, edges and data equations act on the coarse correction as
  * they act on the fine surface, and no coarse grid pins the correction at data nodes of its own. With P interpolating
  * from at most one node away and A reaching two nodes, A<sub>c</sub> again reaches two coarse nodes, so every level
- * keeps the 5 &times; 5 window of {@link GridMatrix}.
+ * keeps the 5 &times; 5 window of {@link GridMatrix}. Beside a fault, P extrapolates from up to three nodes away
+ * ({@link Prolongation}); where a fault tip or a narrow sliver between faults then makes a product reach a third
+ * coarse node, that weight is added to the nearest slot of the window instead. The row still sums as the product
+ * does (a constant is mapped as before), and the cycle stays one fixed linear map, which is all that GMRES asks of a
+ * preconditioner; the coarse operator differs from P<sup>T</sup> A P only in those rows.
  */
 final class GalerkinCoarsening {
     private static final int ROWS_PER_TASK = 4096;
@@ -102,31 +106,18 @@ final class GalerkinCoarsening {
         int base = c * GridMatrix.WINDOW;
         int[] parent = p.parentTable();
         double[] weight = p.weightTable();
-        for (int fj = Math.max(0, 2 * cj - 1); fj <= Math.min(fine.ny() - 1, 2 * cj + 1); fj++) {
-            for (int fi = Math.max(0, 2 * ci - 1); fi <= Math.min(fnx - 1, 2 * ci + 1); fi++) {
-                int f = fj * fnx + fi;
-                double pf = p.weight(f, c);
-                if (pf == 0) {
-                    continue;
-                }
-                int entries = fine.row(f, s.columns, s.entries);
-                for (int e = 0; e < entries; e++) {
-                    int col = s.columns[e];
-                    double a = pf * s.entries[e];
-                    int colI = col % fnx;
-                    int colJ = col / fnx;
-                    int first = Prolongation.MAX_PARENTS * col;
-                    for (int m = first; m < first + Prolongation.MAX_PARENTS && parent[m] >= 0; m++) {
-                        int di = 2 * (parent[m] % cnx - ci);
-                        int dj = 2 * (parent[m] / cnx - cj);
-                        int si = (di >> 1) + 2;
-                        int sj = (dj >> 1) + 2;
-                        if (si < 0 || si > 4 || sj < 0 || sj > 4) {
-                            throw new IllegalStateException("coarse operator reaches beyond two nodes at coarse node ("
-                                    + ci + ", " + cj + ") from fine node (" + colI + ", " + colJ + ")");
-                        }
-                        windows[base + sj * GridMatrix.SPAN + si] += a * weight[m];
-                    }
+        for (int slot = p.firstChild(c); slot < p.endOfChildren(c); slot++) {
+            int f = p.child(slot);
+            double pf = p.childWeight(slot);
+            int entries = fine.row(f, s.columns, s.entries);
+            for (int e = 0; e < entries; e++) {
+                int col = s.columns[e];
+                double a = pf * s.entries[e];
+                int first = Prolongation.MAX_PARENTS * col;
+                for (int m = first; m < first + Prolongation.MAX_PARENTS && parent[m] >= 0; m++) {
+                    int si = Math.max(0, Math.min(4, parent[m] % cnx - ci + 2));
+                    int sj = Math.max(0, Math.min(4, parent[m] / cnx - cj + 2));
+                    windows[base + sj * GridMatrix.SPAN + si] += a * weight[m];
                 }
             }
         }

@@ -24,7 +24,8 @@ class ProlongationTest {
                 new NodeData(links, SyntheticHorizons.scattered(SyntheticHorizons.PLANE, 50, 3), FaultBarriers.none()),
                 0));
         Prolongation p = new Prolongation(fine);
-        // an even node count (16) leaves the last row without a coarse row above it: those nodes copy the one below
+        // an even node count (16) leaves the last row without a coarse row above it: those nodes extrapolate from
+        // the two coarse rows below
         assertEquals(11, p.coarseNx());
         assertEquals(8, p.coarseNy());
         double[] coarse = new double[p.coarseNx() * p.coarseNy()];
@@ -36,9 +37,8 @@ class ProlongationTest {
         for (int k = 0; k < grid.size(); k++) {
             int i = grid.column(k);
             int j = grid.row(k);
-            // bilinear interpolation is exact for a plane (hand calculation)
-            double expected = j == 15 ? plane(i, 14) : plane(i, j);
-            assertEquals(expected, interpolated[k], 1e-9, "node (" + i + ", " + j + ")");
+            // bilinear interpolation and linear extrapolation are exact for a plane (hand calculation)
+            assertEquals(plane(i, j), interpolated[k], 1e-9, "node (" + i + ", " + j + ")");
         }
     }
 
@@ -81,6 +81,54 @@ class ProlongationTest {
     }
 
     /** Parents of plain bilinear interpolation inside the grid: 1, 2 or 4. */
+    /**
+     * Beside the fault and the fault polygon, nodes that lose corners extrapolate from the corners they keep: a plane
+     * is still reproduced there (linear extrapolation is exact for a plane; hand calculation), except where the fault
+     * also cuts the far-side neighbours, next to its tip and the polygon's corners.
+     */
+    @Test
+    void planeIsReproducedBesideTheFault() {
+        CurvatureLevel level = FaultedPatch.equations(0);
+        GridGeometry grid = level.geometry();
+        Prolongation p = new Prolongation(LevelLinks.of(level));
+        double[] coarse = new double[p.coarseNx() * p.coarseNy()];
+        for (int k = 0; k < coarse.length; k++) {
+            coarse[k] = plane(2 * (k % p.coarseNx()), 2 * (k / p.coarseNx()));
+        }
+        double[] interpolated = new double[grid.size()];
+        p.interpolateAdd(coarse, interpolated, 0, grid.size());
+        int cut = 0;
+        int exact = 0;
+        for (int k = 0; k < grid.size(); k++) {
+            int i = grid.column(k);
+            int j = grid.row(k);
+            int parents = p.parents(k, PARENTS, WEIGHTS);
+            boolean lostCorners = parents > 0 && !sameParentsAsBilinear(p, i, j, parents);
+            if (lostCorners) {
+                cut++;
+                exact += Math.abs(interpolated[k] - plane(i, j)) < 1e-9 ? 1 : 0;
+            } else if (parents > 0) {
+                assertEquals(plane(i, j), interpolated[k], 1e-9, "node (" + i + ", " + j + ")");
+            }
+        }
+        assertTrue(cut > 30, "nodes that lose corners to the fault or the polygon: " + cut);
+        assertTrue(exact >= 0.9 * cut, "plane reproduced at " + exact + " of " + cut + " nodes that lose corners");
+    }
+
+    private static boolean sameParentsAsBilinear(Prolongation p, int i, int j, int parents) {
+        if (parents != expectedParents(i, j)) {
+            return false;
+        }
+        for (int m = 0; m < parents; m++) {
+            int ci = PARENTS[m] % p.coarseNx();
+            int cj = PARENTS[m] / p.coarseNx();
+            if (Math.abs(2 * ci - i) > 1 || Math.abs(2 * cj - j) > 1 || WEIGHTS[m] != 1.0 / parents) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private static int expectedParents(int i, int j) {
         return (i % 2 == 1 ? 2 : 1) * (j % 2 == 1 ? 2 : 1);
     }
@@ -103,8 +151,11 @@ class ProlongationTest {
         assertFalse(fine.east(3, 2));
         Prolongation p = new Prolongation(fine);
         int parents = p.parents(grid.index(3, 2), PARENTS, WEIGHTS);
-        assertEquals(1, parents);
-        assertEquals(1 * p.coarseNx() + 1, PARENTS[0], "node (3, 2) copies coarse node (1, 1) only");
-        assertEquals(1, WEIGHTS[0]);
+        // (1, 1) and its west neighbour (0, 1), extrapolated half a coarse cell east: 1.5 and -0.5
+        assertEquals(2, parents);
+        assertEquals(1 * p.coarseNx() + 1, PARENTS[0], "node (3, 2) takes coarse node (1, 1)");
+        assertEquals(1.5, WEIGHTS[0]);
+        assertEquals(1 * p.coarseNx(), PARENTS[1], "and (0, 1), on the same side of the fault");
+        assertEquals(-0.5, WEIGHTS[1]);
     }
 }
