@@ -43,13 +43,14 @@ final class Prolongation {
         parent = new int[MAX_PARENTS * fineNx * fineNy];
         weight = new double[parent.length];
         Arrays.fill(parent, -1);
-        for (int j = 0; j < fineNy; j++) {
+        // each node writes only its own parent slots, so rows can be filled side by side
+        Parallel.forEach(fineNy, j -> {
             for (int i = 0; i < fineNx; i++) {
                 if (fine.unknown(i, j)) {
                     assignParents(fine, i, j);
                 }
             }
-        }
+        });
         childStart = new int[coarseNx * coarseNy + 1];
         for (int p : parent) {
             if (p >= 0) {
