@@ -3,6 +3,8 @@ package org.faultbench.ui.plot;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.faultbench.core.scale.RoundSteps;
+
 /**
  * One axis of a plot: its title, range and scale (linear or base-10 logarithmic), and the tick values a reader
  * expects: 1, 2 or 5 times a power of ten on a linear axis, the decades on a log axis.
@@ -42,25 +44,18 @@ public record PlotAxis(String title, double min, double max, boolean logarithmic
     }
 
     public List<Double> ticks() {
-        List<Double> ticks = new ArrayList<>();
         if (logarithmic) {
+            List<Double> ticks = new ArrayList<>();
             for (double v = min; v <= max * 1.000001; v *= 10) {
                 ticks.add(v);
             }
             return ticks;
         }
-        double step = niceStep((max - min) / 6);
-        for (double v = Math.ceil(min / step) * step; v <= max + step * 1e-9; v += step) {
-            ticks.add(Math.abs(v) < step * 1e-9 ? 0 : v);
-        }
-        return ticks;
+        return RoundSteps.multiples(min, max, niceStep((max - min) / 6));
     }
 
     /** The step of 1, 2 or 5 times a power of ten nearest above {@code rough}. */
     static double niceStep(double rough) {
-        double power = Math.pow(10, Math.floor(Math.log10(rough)));
-        double mantissa = rough / power;
-        double nice = mantissa <= 1 ? 1 : mantissa <= 2 ? 2 : mantissa <= 5 ? 5 : 10;
-        return nice * power;
+        return RoundSteps.atLeast(rough, 1, 2, 5);
     }
 }
