@@ -102,7 +102,6 @@ final class GalerkinCoarsening {
         int cnx = p.coarseNx();
         int ci = c % cnx;
         int cj = c / cnx;
-        int fnx = fine.nx();
         int base = c * GridMatrix.WINDOW;
         int[] parent = p.parentTable();
         double[] weight = p.weightTable();

@@ -48,13 +48,22 @@ final class LevelLinks {
         for (int j = 0; j < coarseNy; j++) {
             for (int i = 0; i < coarseNx; i++) {
                 int k = j * coarseNx + i;
-                east[k] = i + 1 < coarseNx && coarseUnknown[k] && coarseUnknown[k + 1]
-                        && east(2 * i, 2 * j) && east(2 * i + 1, 2 * j);
+                east[k] = i + 1 < coarseNx && coarseUnknown[k] && coarseUnknown[k + 1] && coarseEastOpen(i, j);
                 north[k] = j + 1 < coarseNy && coarseUnknown[k] && coarseUnknown[k + coarseNx]
-                        && north(2 * i, 2 * j) && north(2 * i, 2 * j + 1);
+                        && coarseNorthOpen(i, j);
             }
         }
         return new LevelLinks(coarseNx, coarseNy, coarseUnknown, east, north);
+    }
+
+    /** Whether both links from node (2ci, 2cj) to (2ci + 2, 2cj) are open: what joins coarse node (ci, cj) eastward. */
+    boolean coarseEastOpen(int ci, int cj) {
+        return east(2 * ci, 2 * cj) && east(2 * ci + 1, 2 * cj);
+    }
+
+    /** Whether both links from node (2ci, 2cj) to (2ci, 2cj + 2) are open: what joins coarse node (ci, cj) north. */
+    boolean coarseNorthOpen(int ci, int cj) {
+        return north(2 * ci, 2 * cj) && north(2 * ci, 2 * cj + 1);
     }
 
     int nx() {

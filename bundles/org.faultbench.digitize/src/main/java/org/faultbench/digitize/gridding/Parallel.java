@@ -100,8 +100,7 @@ final class Parallel {
 
     /** Sum of x&middot;y, added block by block in a fixed order so that it does not depend on the thread count. */
     static double dot(double[] x, double[] y) {
-        int blocks = (x.length + BLOCK - 1) / BLOCK;
-        double[] partial = new double[Math.max(1, blocks)];
+        double[] partial = new double[blocks(x.length)];
         forRange(x.length, (from, to) -> {
             double sum = 0;
             for (int k = from; k < to; k++) {

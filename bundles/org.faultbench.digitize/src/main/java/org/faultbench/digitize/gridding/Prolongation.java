@@ -181,9 +181,7 @@ final class Prolongation {
                 || !coarseUnknown[cj * coarseNx + ci]) {
             return false;
         }
-        int fi = 2 * Math.min(ci, ni);
-        int fj = 2 * Math.min(cj, nj);
-        return di != 0 ? fine.east(fi, fj) && fine.east(fi + 1, fj) : fine.north(fi, fj) && fine.north(fi, fj + 1);
+        return di != 0 ? fine.coarseEastOpen(Math.min(ci, ni), cj) : fine.coarseNorthOpen(ci, Math.min(cj, nj));
     }
 
     /** Of three corners of a cell, keeps the two that are opposite each other (listed in row order) and says 2. */
@@ -282,17 +280,6 @@ final class Prolongation {
 
     double[] weightTable() {
         return weight;
-    }
-
-    /** The weight of coarse node {@code c} in fine node {@code k}, 0 when it is not a parent. */
-    double weight(int k, int c) {
-        int base = MAX_PARENTS * k;
-        for (int m = 0; m < MAX_PARENTS && parent[base + m] >= 0; m++) {
-            if (parent[base + m] == c) {
-                return weight[base + m];
-            }
-        }
-        return 0;
     }
 
     /** fine += P coarse on the fine nodes {@code from} (inclusive) to {@code to} (exclusive). */
