@@ -50,8 +50,8 @@ class GmresTest {
 
     /**
      * A vector almost along the basis: one classical Gram&ndash;Schmidt pass would leave it orthogonal only to about
-     * 1e-16 / 1e-9 of its length; the repeated pass must bring that back to rounding level. Vectors span several
-     * parallel blocks.
+     * 1e-16 / 1e-9 of its length; the repeated pass must bring that back to rounding level (Daniel, Gragg, Kaufman &amp;
+     * Stewart 1976, Math. Comp. 30, 772&ndash;795; from memory). Vectors span several parallel blocks.
      */
     @Test
     void orthogonalisesAVectorAlmostInTheBasisSpan() {
